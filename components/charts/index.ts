@@ -1,0 +1,1 @@
+export { bandColour, okabeItoPalette } from "./palette";
