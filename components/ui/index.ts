@@ -1,0 +1,15 @@
+export { cx } from "./class-names";
+export { Button, ButtonLink, buttonClasses } from "./button";
+export type { ButtonSize, ButtonVariant } from "./button";
+export { SubmitButton } from "./submit-button";
+export { Field, Input, Select, SelectField, TextField } from "./field";
+export type { FieldDescription, SelectOption } from "./field";
+export { Panel } from "./panel";
+export { PageHeader } from "./page-header";
+export { EmptyState } from "./empty-state";
+export { Badge, RoleBadge, roleDescriptions, roleLabels } from "./badge";
+export type { BadgeTone } from "./badge";
+export { Notice } from "./notice";
+export type { NoticeTone } from "./notice";
+export { DataTable, dataColumnHelper, dataTableFeatures } from "./data-table";
+export type { DataColumn, DataColumnMeta, DataTableFeatures } from "./data-table";
