@@ -1,0 +1,10 @@
+export { type ComplexMatrix, complexMatrixFromRows, createComplexMatrix, hermiticityDefect } from "./complex-matrix";
+export {
+  type EigenOutput,
+  type HermitianEigenSolver,
+  createEigenOutput,
+  createHermitianEigenSolver,
+  eigenHermitian,
+} from "./hermitian-eigen";
+export { type GeneralisedEigenSolver, createGeneralisedEigenSolver } from "./generalised-eigen";
+export { createSeededRandom } from "./seeded-random";
