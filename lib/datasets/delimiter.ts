@@ -1,0 +1,58 @@
+import Papa from "papaparse";
+
+/** Field separators of the files we read; "whitespace" means runs of spaces and tabs (no quoting). */
+export type Delimiter = "," | "\t" | ";" | "whitespace";
+export type DelimiterChoice = Delimiter | "auto";
+
+/** Detection order: tab and semicolon before comma, since their files may hold commas inside fields. */
+const CHARACTER_DELIMITERS = ["\t", ";", ","] as const;
+
+/** Cells of several records, and per-record problems found while splitting them. */
+export interface SplitRecords {
+  fields: string[][];
+  problems: { index: number; message: string }[];
+}
+
+const splitOnWhitespace = (text: string): string[] => text.trim().split(/[ \t]+/);
+
+/**
+ * Splits record texts into cells. Character delimiters go through papaparse (RFC 4180 quoting, `""` inside
+ * quotes); whitespace splitting is plain. Records are joined into one parse so that large files cost one
+ * papaparse call per batch, not per line.
+ * @param texts - complete records (no blank or comment lines)
+ * @param delimiter - the field separator
+ */
+export function splitRecords(texts: readonly string[], delimiter: Delimiter): SplitRecords {
+  if (delimiter === "whitespace") return { fields: texts.map(splitOnWhitespace), problems: [] };
+  const parsed = Papa.parse<string[]>(texts.join("\n"), { delimiter, quoteChar: '"', skipEmptyLines: false });
+  const problems = parsed.errors.map((e) => ({
+    index: e.row ?? 0,
+    message: e.type === "Quotes" ? `badly quoted field (${e.message})` : e.message,
+  }));
+  if (parsed.data.length !== texts.length)
+    problems.push({ index: 0, message: "the quoting of these rows could not be read" });
+  return { fields: parsed.data, problems };
+}
+
+const consistentCount = (rows: string[][]): number | null =>
+  rows.length > 0 && rows.every((r) => r.length === rows[0].length) ? rows[0].length : null;
+
+/**
+ * Picks the delimiter that splits a sample of records (header first) into the same number of cells, more
+ * than one: tab, then semicolon, then comma, then whitespace. When none is consistent, the one giving the
+ * header most cells wins, so that the parse then reports the ragged rows; a one-column file reads as comma.
+ * @param sample - the first records of the file, header first
+ */
+export function detectDelimiter(sample: readonly string[]): Delimiter {
+  const candidates: Delimiter[] = [...CHARACTER_DELIMITERS, "whitespace"];
+  const splits = candidates.map((d) => ({ d, rows: splitRecords(sample, d).fields }));
+  const consistent = splits.find(({ rows }) => (consistentCount(rows) ?? 0) > 1);
+  if (consistent) return consistent.d;
+  const widest = splits.reduce((best, s) => ((s.rows[0]?.length ?? 0) > (best.rows[0]?.length ?? 0) ? s : best));
+  return (widest.rows[0]?.length ?? 0) > 1 ? widest.d : ",";
+}
+
+/** How a delimiter is named in messages. */
+export function describeDelimiter(delimiter: Delimiter): string {
+  return { ",": "comma", "\t": "tab", ";": "semicolon", whitespace: "whitespace" }[delimiter];
+}

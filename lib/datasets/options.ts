@@ -1,0 +1,32 @@
+/** Limits of one parse; both are refusals with a clear message, never silent truncation. */
+export interface ParseOptions {
+  /** Largest accepted file in bytes. Default {@link DEFAULT_MAX_BYTES} (25 MiB). */
+  maxBytes?: number;
+  /** Largest accepted number of points (energies) in the file. Default {@link DEFAULT_MAX_POINTS}. */
+  maxPoints?: number;
+}
+
+/** 25 MiB = 26 214 400 bytes. */
+export const DEFAULT_MAX_BYTES = 25 * 1024 * 1024;
+/** 500 000 points. */
+export const DEFAULT_MAX_POINTS = 500_000;
+
+export type ResolvedParseOptions = Required<ParseOptions>;
+
+/** Fills in the defaults once; rejects limits that are not positive integers. */
+export function resolveParseOptions(options: ParseOptions = {}): ResolvedParseOptions {
+  const resolved = {
+    maxBytes: options.maxBytes ?? DEFAULT_MAX_BYTES,
+    maxPoints: options.maxPoints ?? DEFAULT_MAX_POINTS,
+  };
+  for (const [name, value] of Object.entries(resolved))
+    if (!Number.isInteger(value) || value <= 0) throw new RangeError(`${name} must be a positive integer, got ${value}`);
+  return resolved;
+}
+
+/** "25 MiB (26 214 400 bytes)" — the byte limit as a user reads it. */
+export function describeByteLimit(bytes: number): string {
+  const mib = bytes / (1024 * 1024);
+  const grouped = bytes.toLocaleString("en-US").replace(/,/g, " ");
+  return `${Number.isInteger(mib) ? mib : mib.toFixed(1)} MiB (${grouped} bytes)`;
+}
