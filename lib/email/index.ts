@@ -1,0 +1,1 @@
+export { invitationMessage, passwordResetMessage, type MailMessage } from "./messages";

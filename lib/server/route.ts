@@ -1,0 +1,84 @@
+import "server-only";
+import { NextResponse } from "next/server";
+import { z } from "zod";
+import type { WorkspaceRole } from "@/lib/auth/roles";
+import { AppError, errorBody, toAppError } from "./errors";
+import { parseInput } from "./parse-input";
+import type { Principal } from "./principal";
+import { authorizeWorkspace, requirePrincipal, type WorkspaceAccess } from "./workspace-access";
+
+type SlugContext = { params: Promise<{ slug: string }> };
+
+/** Largest JSON body a route accepts, bytes (these routes carry a few fields; uploads have their own). */
+const maxJsonBytes = 64 * 1024;
+
+async function readJson(request: Request): Promise<unknown> {
+  const text = await request.text();
+  if (text.length > maxJsonBytes) throw new AppError("bad_request", "The request body is too large.");
+  if (text.trim() === "") throw new AppError("invalid_json", "The request body is empty; send a JSON object.");
+  try {
+    return JSON.parse(text);
+  } catch {
+    throw new AppError("invalid_json");
+  }
+}
+
+function errorResponse(thrown: unknown): NextResponse {
+  const error = toAppError(thrown);
+  return NextResponse.json(errorBody(error), { status: error.status });
+}
+
+/** A handler's result: a plain value becomes a 200 JSON response; return a Response for other statuses. */
+type HandlerResult = Response | Record<string, unknown> | unknown[];
+
+function toResponse(result: HandlerResult): Response {
+  return result instanceof Response ? result : NextResponse.json(result);
+}
+
+type InputOption<S> = { input?: S };
+type ParsedInput<S> = S extends z.ZodType ? z.output<S> : undefined;
+
+async function parseBody<S extends z.ZodType | undefined>(request: Request, schema: S): Promise<ParsedInput<S>> {
+  if (!schema) return undefined as ParsedInput<S>;
+  return parseInput(schema, await readJson(request)) as ParsedInput<S>;
+}
+
+/**
+ * Route handler for a signed-in user outside any workspace (e.g. listing and creating workspaces).
+ * Resolves the session or API key, parses the JSON body with `input`, and turns AppErrors into JSON.
+ */
+export function userRoute<S extends z.ZodType | undefined = undefined>(
+  options: InputOption<S>,
+  handler: (context: { principal: Principal; input: ParsedInput<S>; request: Request }) => Promise<HandlerResult>,
+) {
+  return async (request: Request): Promise<Response> => {
+    try {
+      const principal = await requirePrincipal(request.headers);
+      const input = await parseBody(request, options.input as S);
+      return toResponse(await handler({ principal, input, request }));
+    } catch (thrown) {
+      return errorResponse(thrown);
+    }
+  };
+}
+
+/**
+ * Route handler under /api/workspaces/{slug}: adds the membership and minimum-role check
+ * (non-member → 404, below the role → 403) before the body is even parsed.
+ */
+export function workspaceRoute<S extends z.ZodType | undefined = undefined>(
+  options: InputOption<S> & { minimumRole: WorkspaceRole },
+  handler: (context: { access: WorkspaceAccess; input: ParsedInput<S>; request: Request }) => Promise<HandlerResult>,
+) {
+  return async (request: Request, context: SlugContext): Promise<Response> => {
+    try {
+      const principal = await requirePrincipal(request.headers);
+      const { slug } = await context.params;
+      const access = await authorizeWorkspace(principal, slug, options.minimumRole);
+      const input = await parseBody(request, options.input as S);
+      return toResponse(await handler({ access, input, request }));
+    } catch (thrown) {
+      return errorResponse(thrown);
+    }
+  };
+}

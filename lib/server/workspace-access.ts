@@ -1,0 +1,52 @@
+import "server-only";
+import { headers } from "next/headers";
+import { notFound } from "next/navigation";
+import { getMembership, getWorkspaceBySlug, type WorkspaceSummary } from "@/db/queries/workspaces";
+import { hasRole, type WorkspaceRole } from "@/lib/auth/roles";
+import { workspaceSlugSchema } from "@/lib/schemas/workspaces";
+import { AppError } from "./errors";
+import { resolvePrincipal, type Principal } from "./principal";
+import { requireUser, type CurrentUser } from "./session";
+
+/** What an authorised request knows about its workspace. */
+export type WorkspaceAccess = { user: CurrentUser; workspace: WorkspaceSummary; role: WorkspaceRole; memberId: string };
+
+/**
+ * The one authorisation rule. Non-members (and keys bound to another workspace) get not_found, so a
+ * workspace's existence is never revealed; members below `minimumRole` get forbidden.
+ */
+export async function authorizeWorkspace(
+  principal: Principal,
+  slug: string,
+  minimumRole: WorkspaceRole,
+): Promise<WorkspaceAccess> {
+  if (!workspaceSlugSchema.safeParse(slug).success) throw new AppError("not_found");
+  const workspace = await getWorkspaceBySlug(slug);
+  if (!workspace) throw new AppError("not_found");
+  if (principal.via === "api-key" && principal.onlyWorkspaceId !== workspace.id) throw new AppError("not_found");
+  const membership = await getMembership({ workspaceId: workspace.id, userId: principal.user.id });
+  if (!membership) throw new AppError("not_found");
+  if (!hasRole(membership.role, minimumRole)) throw new AppError("forbidden");
+  return { user: principal.user, workspace, role: membership.role, memberId: membership.memberId };
+}
+
+/**
+ * For pages: sends a signed-out visitor to sign-in, calls notFound() for a non-member, and throws
+ * AppError("forbidden") for a member below `minimumRole` (the segment's error boundary shows it).
+ */
+export async function requireWorkspaceMember(slug: string, minimumRole: WorkspaceRole = "viewer"): Promise<WorkspaceAccess> {
+  const user = await requireUser(`/w/${encodeURIComponent(slug)}`);
+  try {
+    return await authorizeWorkspace({ user, via: "session" }, slug, minimumRole);
+  } catch (error) {
+    if (error instanceof AppError && error.code === "not_found") notFound();
+    throw error;
+  }
+}
+
+/** For handlers and actions: the principal of the current request or AppError("unauthenticated"). */
+export async function requirePrincipal(requestHeaders?: Headers): Promise<Principal> {
+  const principal = await resolvePrincipal(requestHeaders ?? (await headers()));
+  if (!principal) throw new AppError("unauthenticated");
+  return principal;
+}
