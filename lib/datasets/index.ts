@@ -19,3 +19,12 @@ export { type ParseOptions, DEFAULT_MAX_BYTES, DEFAULT_MAX_POINTS, describeByteL
 export { type Delimiter, type DelimiterChoice, detectDelimiter, describeDelimiter } from "./delimiter";
 export { kColumnsToCartesian, labelledPointToCartesian } from "./kCoordinates";
 export { type PathVertex, buildKPath, interpolateAlongPath } from "./kPath";
+export {
+  type ColumnRole,
+  type ColumnGuess,
+  type ColumnRoleGuess,
+  type SuggestedMapping,
+  guessColumnRoles,
+  guessEnergyUnit,
+} from "./columnRoles";
+export { type FilePreview, type PreviewOptions, previewDelimitedText } from "./preview";

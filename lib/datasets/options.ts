@@ -24,9 +24,13 @@ export function resolveParseOptions(options: ParseOptions = {}): ResolvedParseOp
   return resolved;
 }
 
-/** "25 MiB (26 214 400 bytes)" — the byte limit as a user reads it. */
+/**
+ * The byte limit as a user reads it: "25 MiB (26 214 400 bytes)", or "1 024 bytes" below 1 MiB.
+ * @param bytes - a size in bytes
+ */
 export function describeByteLimit(bytes: number): string {
+  const grouped = `${bytes.toLocaleString("en-US").replace(/,/g, " ")} bytes`;
   const mib = bytes / (1024 * 1024);
-  const grouped = bytes.toLocaleString("en-US").replace(/,/g, " ");
-  return `${Number.isInteger(mib) ? mib : mib.toFixed(1)} MiB (${grouped} bytes)`;
+  if (mib < 1) return grouped;
+  return `${Number.isInteger(mib) ? mib : mib.toFixed(1)} MiB (${grouped})`;
 }

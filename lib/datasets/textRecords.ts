@@ -11,6 +11,8 @@ export interface TextRecord {
 const fileIssue = (row: number | null, message: string) =>
   new StopParsing({ row, column: null, columnName: null, message });
 
+const UTF16_MESSAGE = "the file is UTF-16 text; save it as UTF-8 (CSV UTF-8) and upload again";
+
 const quoteCount = (text: string): number => {
   let n = 0;
   for (let i = text.indexOf('"'); i !== -1; i = text.indexOf('"', i + 1)) n++;
@@ -34,18 +36,19 @@ export async function* readTextRecords(source: ByteSource, maxBytes: number): As
   // The record still waiting for its closing quote; held in an object so that closures update it.
   const pending: { open: { line: number; text: string; quotes: number } | null } = { open: null };
 
+  // A UTF-16 byte-order mark: the file is text, only in an encoding we do not read.
+  const isUtf16 = () => (head[0] === 0xff && head[1] === 0xfe) || (head[0] === 0xfe && head[1] === 0xff);
+
   function* takeLine(raw: string): Generator<TextRecord> {
     lineNumber++;
     const line = raw.endsWith("\r") ? raw.slice(0, -1) : raw;
-    if (line.includes("\0")) {
-      const utf16 = (head[0] === 0xff && head[1] === 0xfe) || (head[0] === 0xfe && head[1] === 0xff);
+    if (line.includes("\0"))
       throw fileIssue(
         lineNumber,
-        utf16
-          ? "the file is UTF-16 text; save it as UTF-8 (CSV UTF-8) and upload again"
+        isUtf16()
+          ? UTF16_MESSAGE
           : "the file contains a NUL byte: this looks like a binary file, not delimited text",
       );
-    }
     let open = pending.open;
     if (open) {
       open.text += "\n" + line;
@@ -65,7 +68,10 @@ export async function* readTextRecords(source: ByteSource, maxBytes: number): As
     try {
       return bytes ? decoder.decode(bytes, { stream: true }) : decoder.decode();
     } catch {
-      throw fileIssue(lineNumber + 1, "the file is not valid UTF-8 text (binary data, or another text encoding)");
+      throw fileIssue(
+        lineNumber + 1,
+        isUtf16() ? UTF16_MESSAGE : "the file is not valid UTF-8 text (binary data, or another text encoding)",
+      );
     }
   }
 
