@@ -1,8 +1,25 @@
 import type { Metadata, Viewport } from "next";
+import localFont from "next/font/local";
 import { GeistMono } from "geist/font/mono";
 import type { ReactNode } from "react";
-import { interGreek, interLatin } from "./fonts";
 import "./globals.css";
+
+// Inter ships with the app (nothing is downloaded at build or run time). The Greek subset is a second
+// family in the font stack so that Γ, Δ, Σ and χ in k-path labels and fit statistics use the same face.
+const interLatin = localFont({
+  src: "./fonts/inter-latin-wght-normal.woff2",
+  variable: "--font-inter",
+  weight: "100 900",
+  display: "swap",
+});
+
+const interGreek = localFont({
+  src: "./fonts/inter-greek-wght-normal.woff2",
+  variable: "--font-inter-greek",
+  weight: "100 900",
+  display: "swap",
+  preload: false,
+});
 
 export const metadata: Metadata = {
   title: { default: "Bandwright", template: "%s · Bandwright" },

@@ -21,6 +21,8 @@ import { cx } from "./class-names";
 export interface DataColumnMeta {
   /** Right-align with tabular figures (numbers with units). */
   numeric?: boolean;
+  /** Right-align without number styling (row actions). */
+  alignEnd?: boolean;
   /** Screen-reader-only header text for columns whose visible header is empty (row actions). */
   srHeader?: string;
 }
@@ -103,7 +105,7 @@ export function DataTable<Row extends RowData>({
                     aria-sort={canSort ? sortLabel(direction) : undefined}
                     className={cx(
                       "border-y border-line px-4 py-2 text-xs font-semibold uppercase tracking-wide text-ink-muted",
-                      meta?.numeric ? "text-right" : "text-left",
+                      meta?.numeric || meta?.alignEnd ? "text-right" : "text-left",
                     )}
                   >
                     {header.isPlaceholder ? null : canSort ? (
@@ -141,7 +143,11 @@ export function DataTable<Row extends RowData>({
                 {row.getAllCells().map((cell) => (
                   <td
                     key={cell.id}
-                    className={cx("px-4 py-2 align-middle", cell.column.columnDef.meta?.numeric && "text-right tabular-nums")}
+                    className={cx(
+                      "px-4 py-2 align-middle",
+                      cell.column.columnDef.meta?.numeric && "text-right tabular-nums",
+                      cell.column.columnDef.meta?.alignEnd && "text-right",
+                    )}
                   >
                     <table.FlexRender cell={cell} />
                   </td>

@@ -1,0 +1,16 @@
+import type { ReactNode } from "react";
+import { AppHeader } from "@/components/shell/app-header";
+import { getCurrentUser } from "@/lib/server/session";
+
+export const dynamic = "force-dynamic";
+
+/** Shell of the app: header with the signed-in user. Each page checks access itself. */
+export default async function AppLayout({ children }: { children: ReactNode }) {
+  const user = await getCurrentUser();
+  return (
+    <div className="flex min-h-screen flex-col">
+      <AppHeader user={user} />
+      <div className="flex-1">{children}</div>
+    </div>
+  );
+}

@@ -1,0 +1,28 @@
+import type { ReactNode } from "react";
+import { WorkspaceNav } from "@/components/shell/workspace-nav";
+import { RoleBadge } from "@/components/ui";
+import { requireWorkspaceMember } from "@/lib/server/workspace-access";
+
+export const dynamic = "force-dynamic";
+
+/** Workspace header and section tabs. Pages below check access again for their own minimum role. */
+export default async function WorkspaceLayout({ children, params }: { children: ReactNode; params: Promise<{ slug: string }> }) {
+  const { slug } = await params;
+  const { workspace, role } = await requireWorkspaceMember(slug, "viewer");
+  return (
+    <>
+      <div className="border-b border-line bg-surface">
+        <div className="mx-auto max-w-page px-4 pt-4">
+          <div className="flex items-center gap-2">
+            <p className="truncate text-base font-semibold text-ink">{workspace.name}</p>
+            <RoleBadge role={role} />
+          </div>
+          <div className="mt-2">
+            <WorkspaceNav slug={workspace.slug} />
+          </div>
+        </div>
+      </div>
+      <main className="mx-auto max-w-page px-4 py-8">{children}</main>
+    </>
+  );
+}

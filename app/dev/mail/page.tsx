@@ -1,0 +1,64 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { formatDateTime, linkSegments } from "@/components/format";
+import { Brand } from "@/components/shell/brand";
+import { EmptyState, PageHeader } from "@/components/ui";
+import { isMailSinkEnabled, listSinkMessages } from "@/lib/server/mail-sink";
+
+export const dynamic = "force-dynamic";
+export const metadata: Metadata = { title: "Development mail", robots: { index: false } };
+
+/**
+ * Development only: the e-mails the local SMTP sink has caught, so a demo can follow invitation and
+ * reset links. Without a configured sink (production) the page does not exist.
+ */
+export default async function DevMailPage() {
+  if (!isMailSinkEnabled()) notFound();
+  const messages = await listSinkMessages();
+  return (
+    <div className="mx-auto max-w-page px-4 py-8">
+      <div className="mb-6">
+        <Brand />
+      </div>
+      <PageHeader
+        eyebrow="Development only"
+        title="Caught e-mail"
+        description="Every message the app sent to the local mail sink, newest first. Nothing here reaches a real inbox."
+      />
+      {messages.length === 0 ? (
+        <EmptyState
+          title="No e-mail yet"
+          description="Invite a member or request a password reset; the message shows up here. Reload the page to check again."
+        />
+      ) : (
+        <ol className="flex flex-col gap-4">
+          {messages.map((message) => (
+            <li key={message.id} className="rounded-lg border border-line bg-surface shadow-sm">
+              <article aria-labelledby={`mail-${message.id}`}>
+                <header className="border-b border-line px-4 py-3">
+                  <h2 id={`mail-${message.id}`} className="text-base">
+                    {message.subject}
+                  </h2>
+                  <p className="mt-0.5 text-xs text-ink-muted">
+                    To {message.to} · {formatDateTime(message.receivedAt)}
+                  </p>
+                </header>
+                <pre className="overflow-x-auto whitespace-pre-wrap px-4 py-3 font-sans text-sm">
+                  {linkSegments(message.text).map((segment, i) =>
+                    segment.kind === "link" ? (
+                      <a key={i} href={segment.href}>
+                        {segment.href}
+                      </a>
+                    ) : (
+                      segment.text
+                    ),
+                  )}
+                </pre>
+              </article>
+            </li>
+          ))}
+        </ol>
+      )}
+    </div>
+  );
+}
