@@ -224,7 +224,7 @@ describe("several starts", () => {
   it("reports a start where the model is not finite and fits from the others", () => {
     const base = nistProblem(misra1a, 1);
     const result = fitLeastSquares(
-      { ...base, evaluate: (theta) => (theta[0] > 300 ? base.evaluate(theta).map(() => NaN) : base.evaluate(theta)) },
+      { ...base, evaluate: (theta) => (theta[0] > 300 ? Array.from(base.evaluate(theta), () => NaN) : base.evaluate(theta)) },
       { starts: 4, seed: 2, startSpread: 0.5 },
     );
     const reasons = result.starts.map((s) => s.stopReason);
@@ -343,7 +343,7 @@ describe("refusals", () => {
     expect(() =>
       fitLeastSquares({ ...base, parameters: base.parameters.map((p) => ({ ...p, free: false })) }),
     ).toThrow("No free parameters: nothing to fit");
-    expect(() => fitLeastSquares({ ...base, evaluate: (theta) => base.evaluate(theta).map(() => Infinity) })).toThrow(
+    expect(() => fitLeastSquares({ ...base, evaluate: (theta) => Array.from(base.evaluate(theta), () => Infinity) })).toThrow(
       "No start gave a finite model: non-finite-start",
     );
   });
