@@ -52,7 +52,8 @@ export function solutionStatistics(input: StatisticsInput): SolutionStatistics {
         message: `${names[k]} has no effect on the model at the solution (zero Jacobian column): the data do not determine it`,
       });
 
-  const covariance: (number | null)[][] = names.map(() => names.map(() => null));
+  // (JᵀWJ)⁺ without the factor s², so correlations stay defined when χ² = 0 (exact data).
+  const unscaled: (number | null)[][] = names.map(() => names.map(() => null));
   const determined = new Array<boolean>(p).fill(false);
   if (active.length > 0) {
     const normalised = new Matrix(n, active.length);
@@ -82,22 +83,26 @@ export function solutionStatistics(input: StatisticsInput): SolutionStatistics {
         singular.forEach((s, i) => {
           if (kept[i]) sum += (v.get(a, i) * v.get(b, i)) / (s * s);
         });
-        covariance[k][l] = (s2 * sum) / (columnNorms[k] * columnNorms[l]);
+        unscaled[k][l] = sum / (columnNorms[k] * columnNorms[l]);
       });
     });
   }
 
+  const usable = (k: number): number | null => {
+    const u = unscaled[k][k];
+    return determined[k] && u !== null && u > 0 && Number.isFinite(u) ? u : null;
+  };
   const standardErrors = names.map((_, k) => {
-    const variance = covariance[k][k];
-    return determined[k] && variance !== null && variance > 0 && Number.isFinite(variance) ? Math.sqrt(variance) : null;
+    const u = usable(k);
+    return u === null ? null : Math.sqrt(s2 * u);
   });
   const correlation = names.map((_, k) =>
     names.map((__, l) => {
-      const sk = standardErrors[k];
-      const sl = standardErrors[l];
-      const c = covariance[k][l];
-      if (sk === null || sl === null || c === null) return null;
-      return k === l ? 1 : Math.max(-1, Math.min(1, c / (sk * sl)));
+      const uk = usable(k);
+      const ul = usable(l);
+      const c = unscaled[k][l];
+      if (uk === null || ul === null || c === null) return null;
+      return k === l ? 1 : Math.max(-1, Math.min(1, c / Math.sqrt(uk * ul)));
     }),
   );
   for (let k = 0; k < p; k++)

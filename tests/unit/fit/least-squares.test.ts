@@ -353,3 +353,27 @@ describe("refusals", () => {
     expect(() => fitLeastSquares(nistProblem(misra1a, 0), { starts: 0 })).toThrow(/starts/);
   });
 });
+
+describe("exact data", () => {
+  // A model that reproduces its data exactly has χ² = 0 and so s² = 0: zero standard errors (GSL
+  // covariance convention), while correlations, which do not depend on s², stay defined.
+  it("recovers an exact line with zero standard errors and finite correlations", () => {
+    const xs = [0, 1, 2, 3, 4];
+    const result = fitLeastSquares({
+      parameters: [
+        { name: "offset", initial: 0 },
+        { name: "slope", initial: 0 },
+      ],
+      observed: xs.map((x) => -0.25 + 0.5 * x),
+      evaluate: (theta) => xs.map((x) => theta[0] + theta[1] * x),
+      jacobian: () => xs.flatMap((x) => [1, x]),
+    });
+    expect(result.converged).toBe(true);
+    expect(result.parameters[0].value).toBeCloseTo(-0.25, 12);
+    expect(result.parameters[1].value).toBeCloseTo(0.5, 12);
+    expect(result.parameters[0].standardError).toBeCloseTo(0, 12);
+    // Straight-line fit: corr(offset, slope) = −x̄/√(mean of x²) = −2/√6 (textbook linear regression).
+    expect(result.correlation[0][1]).toBeCloseTo(-2 / Math.sqrt(6), 10);
+    expectAllFinite(result);
+  });
+});
