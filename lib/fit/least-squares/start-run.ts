@@ -89,7 +89,7 @@ export class StartRun {
     const jacobian = this.evaluator.jacobian(this.current);
     const p = this.current.length;
     const norms = new Float64Array(p);
-    for (let i = 0; i < jacobian.length; i++) norms[i % p] += jacobian[i] * jacobian[i];
+    for (let i = 0; i < jacobian.length; i += p) for (let k = 0; k < p; k++) norms[k] += jacobian[i + k] ** 2;
     if (!norms.every(Number.isFinite)) {
       this.stopReason = "non-finite-jacobian";
       return false;
