@@ -33,7 +33,10 @@ const layoutArb = fc.record({
   chunkSize: fc.integer({ min: 1, max: 97 }),
 });
 
-const fileArb = layoutArb.chain((layout) => {
+interface Layout { delimiter: string; explicit: boolean; eol: string; bom: boolean; quote: boolean; chunkSize: number }
+interface FileCase { layout: Layout; rows: Row[]; comments: boolean[] }
+
+const fileArb: fc.Arbitrary<FileCase> = layoutArb.chain((layout) => {
   const quoting = layout.quote && layout.delimiter !== "whitespace";
   const labels = quoting ? ["A", "Γ–X", 'cut "7"; east, 2'] : ["A", "B", "Γ–X"];
   return fc.record({
@@ -54,7 +57,7 @@ const mappingFor = (delimiter: string, explicit: boolean) =>
   });
 
 /** Writes the file's lines and remembers the line number (1-based) of each data row. */
-function writeFile(f: fc.Infer<typeof fileArb>) {
+function writeFile(f: FileCase) {
   const { delimiter, quote } = f.layout;
   const sep = delimiter === "whitespace" ? "  " : delimiter;
   const cell = (text: string) => (quote && delimiter !== "whitespace" ? `"${text.replace(/"/g, '""')}"` : text);
