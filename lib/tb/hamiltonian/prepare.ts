@@ -1,0 +1,169 @@
+import { type ComplexMatrix, createComplexMatrix } from "../../linalg";
+import type { Vec3 } from "../geometry/vec3";
+import type { CompiledModel, ModelMatrix } from "../model/compile";
+import { ModelError } from "../model/errors";
+
+/**
+ * The k-dependent coefficients of one matrix (H or S) for a batch of k-points. Because the matrix is
+ * linear in θ, M(k; θ) = Σ_slots θ_parameter[slot] × coefficient(k, slot) at element entry[slot], where a
+ * slot is one (matrix element, parameter) pair with all its Bloch phases summed.
+ */
+export interface PreparedMatrix {
+  /** row-major element index i × n + j of each slot */
+  readonly entry: Int32Array;
+  /** parameter index of each slot */
+  readonly parameter: Int32Array;
+  /** per k-point, per slot: re, im interleaved (length nk × slots × 2) */
+  readonly coefficients: Float64Array;
+  readonly slotCount: number;
+}
+
+/** H (and S) coefficients for a fixed list of k-points, ready for fast assembly at any θ. */
+export interface PreparedHamiltonian {
+  readonly compiled: CompiledModel;
+  /** Cartesian k-points, 1/Å */
+  readonly kPoints: readonly Vec3[];
+  readonly orbitalCount: number;
+  readonly parameterCount: number;
+  readonly hamiltonian: PreparedMatrix;
+  /** null for an orthogonal model (S = I) */
+  readonly overlap: PreparedMatrix | null;
+}
+
+/**
+ * Precomputes, for every k-point, the coefficient of every parameter in every element of H(k) (and S(k)):
+ * H_ij(k) = Σ_terms θ_p f e^{ik·(R + τ_j − τ_i)}.
+ * @param compiled - a compiled model
+ * @param kPoints - Cartesian wave vectors, 1/Å (2π included)
+ */
+export function prepareHamiltonian(compiled: CompiledModel, kPoints: readonly Vec3[]): PreparedHamiltonian {
+  return {
+    compiled,
+    kPoints,
+    orbitalCount: compiled.orbitalCount,
+    parameterCount: compiled.parameters.length,
+    hamiltonian: prepareMatrix(compiled, kPoints, "hamiltonian"),
+    overlap: compiled.hasOverlap ? prepareMatrix(compiled, kPoints, "overlap") : null,
+  };
+}
+
+function prepareMatrix(compiled: CompiledModel, kPoints: readonly Vec3[], matrix: ModelMatrix): PreparedMatrix {
+  const n = compiled.orbitalCount;
+  const terms = compiled.terms.filter((t) => t.matrix === matrix);
+  const slotOf = new Map<string, number>();
+  const entries: number[] = [];
+  const parameters: number[] = [];
+  const termSlot = terms.map((t) => {
+    const entry = t.from * n + t.to;
+    const key = `${entry}|${t.parameter}`;
+    let slot = slotOf.get(key);
+    if (slot === undefined) {
+      slot = entries.length;
+      slotOf.set(key, slot);
+      entries.push(entry);
+      parameters.push(t.parameter);
+    }
+    return slot;
+  });
+  const slotCount = entries.length;
+  const coefficients = new Float64Array(kPoints.length * slotCount * 2);
+  kPoints.forEach((k, ki) => {
+    const base = ki * slotCount * 2;
+    terms.forEach((t, ti) => {
+      const phase = k[0] * t.bond[0] + k[1] * t.bond[1] + k[2] * t.bond[2];
+      const c = Math.cos(phase);
+      const s = Math.sin(phase);
+      const at = base + termSlot[ti] * 2;
+      coefficients[at] += t.re * c - t.im * s;
+      coefficients[at + 1] += t.re * s + t.im * c;
+    });
+  });
+  return { entry: Int32Array.from(entries), parameter: Int32Array.from(parameters), coefficients, slotCount };
+}
+
+/**
+ * Writes M(k; θ) for k-point `kIndex` into row-major `re` / `im` (overwritten). For the overlap the
+ * identity (orthonormal orbitals on one site) is added.
+ * @param theta - parameter vector in `compiled.parameters` order (eV / dimensionless)
+ */
+export function assembleMatrix(
+  prepared: PreparedMatrix,
+  kIndex: number,
+  theta: Float64Array,
+  re: Float64Array,
+  im: Float64Array,
+  addIdentity: boolean,
+  size: number,
+): void {
+  re.fill(0);
+  im.fill(0);
+  if (addIdentity) for (let i = 0; i < size; i++) re[i * size + i] = 1;
+  const { entry, parameter, coefficients, slotCount } = prepared;
+  const base = kIndex * slotCount * 2;
+  for (let s = 0; s < slotCount; s++) {
+    const value = theta[parameter[s]];
+    const e = entry[s];
+    re[e] += value * coefficients[base + 2 * s];
+    im[e] += value * coefficients[base + 2 * s + 1];
+  }
+}
+
+/** Throws a ModelError unless θ has one finite value per parameter. */
+export function checkParameterVector(compiled: CompiledModel, theta: ArrayLike<number>): void {
+  if (theta.length !== compiled.parameters.length)
+    throw new ModelError([
+      { path: "theta", message: `expected ${compiled.parameters.length} parameter values, got ${theta.length}` },
+    ]);
+  for (let i = 0; i < theta.length; i++)
+    if (!Number.isFinite(theta[i]))
+      throw new ModelError([{ path: `theta.${i}`, message: `parameter "${compiled.parameters[i].name}" is not finite` }]);
+}
+
+/**
+ * H(k; θ) as a complex matrix (eV), for tests and tooling; use {@link prepareHamiltonian} in loops.
+ * @param theta - parameter vector in `compiled.parameters` order
+ * @param k - Cartesian wave vector, 1/Å
+ */
+export function hamiltonianAt(compiled: CompiledModel, theta: ArrayLike<number>, k: Vec3): ComplexMatrix {
+  return matrixAt(compiled, theta, k, "hamiltonian");
+}
+
+/**
+ * S(k; θ) as a complex matrix (dimensionless; the identity for an orthogonal model).
+ * @param k - Cartesian wave vector, 1/Å
+ */
+export function overlapAt(compiled: CompiledModel, theta: ArrayLike<number>, k: Vec3): ComplexMatrix {
+  return matrixAt(compiled, theta, k, "overlap");
+}
+
+/**
+ * ∂H/∂θ_p at k (eV per unit of θ_p); H is linear in θ, so this is H(k) at the unit vector e_p.
+ * For an overlap parameter it is zero; use {@link overlapDerivativeAt}.
+ * @param k - Cartesian wave vector, 1/Å
+ */
+export function hamiltonianDerivativeAt(compiled: CompiledModel, parameter: number, k: Vec3): ComplexMatrix {
+  const unit = new Float64Array(compiled.parameters.length);
+  unit[parameter] = 1;
+  const prepared = prepareMatrix(compiled, [k], "hamiltonian");
+  const m = createComplexMatrix(compiled.orbitalCount);
+  assembleMatrix(prepared, 0, unit, m.re, m.im, false, compiled.orbitalCount);
+  return m;
+}
+
+/** ∂S/∂θ_p at k (Cartesian 1/Å). */
+export function overlapDerivativeAt(compiled: CompiledModel, parameter: number, k: Vec3): ComplexMatrix {
+  const unit = new Float64Array(compiled.parameters.length);
+  unit[parameter] = 1;
+  const prepared = prepareMatrix(compiled, [k], "overlap");
+  const m = createComplexMatrix(compiled.orbitalCount);
+  assembleMatrix(prepared, 0, unit, m.re, m.im, false, compiled.orbitalCount);
+  return m;
+}
+
+function matrixAt(compiled: CompiledModel, theta: ArrayLike<number>, k: Vec3, matrix: ModelMatrix): ComplexMatrix {
+  checkParameterVector(compiled, theta);
+  const prepared = prepareMatrix(compiled, [k], matrix);
+  const m = createComplexMatrix(compiled.orbitalCount);
+  assembleMatrix(prepared, 0, Float64Array.from(theta), m.re, m.im, matrix === "overlap", compiled.orbitalCount);
+  return m;
+}
