@@ -1,0 +1,16 @@
+import { env } from "@/lib/env";
+import { demoPassword, demoUsers, demoWorkspace } from "./lib/demo";
+
+// Printed by npm start once the app answers.
+const lines = [
+  "",
+  `Bandwright is running at ${env.APP_URL}`,
+  "",
+  `Demo workspace: ${demoWorkspace.name} (${env.APP_URL}/w/${demoWorkspace.slug})`,
+  ...demoUsers.map((user) => `  ${user.role.padEnd(7)} ${user.email.padEnd(32)} password: ${demoPassword}`),
+  "",
+  env.MAIL_SINK_URL ? `E-mails are kept by the local sink: ${env.APP_URL}/dev/mail` : "E-mails go to SMTP_URL.",
+  "Press Ctrl-C to stop.",
+  "",
+];
+console.log(lines.join("\n"));

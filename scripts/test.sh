@@ -1,0 +1,58 @@
+#!/usr/bin/env bash
+# npm test: the same set-up as npm start, on a separate PostgreSQL (own data folder and port, so both can
+# run at once) with a freshly created database; then builds and runs every vitest project.
+# Ends with one line "N passed, N failed" and a non-zero exit status on any failure.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+. scripts/lib/common.sh
+
+export NEXT_TELEMETRY_DISABLED=1
+PG_PORT=${TEST_PG_PORT:-54339}
+PG_DATA="$PWD/.data/postgres-test"
+RESULTS="$PWD/test-results"
+
+ensure_node_modules
+ensure_local_secret
+
+if [ ! -x /usr/bin/chromium ]; then
+  if [ "$(id -u)" = 0 ] && command -v apt-get >/dev/null; then
+    log "installing Debian's chromium for the browser tests"
+    DEBIAN_FRONTEND=noninteractive apt-get update -qq
+    DEBIAN_FRONTEND=noninteractive apt-get install -y -qq chromium >/dev/null
+  else
+    die "/usr/bin/chromium is missing; install the Debian package 'chromium' (apt-get install -y chromium)."
+  fi
+fi
+
+OWN_POSTGRES=
+cleanup() {
+  trap - INT TERM EXIT
+  [ -n "$OWN_POSTGRES" ] && stop_postgres "$PG_DATA"
+}
+trap cleanup INT TERM EXIT
+
+if [ -z "${TEST_DATABASE_URL:-}" ]; then
+  start_postgres "$PG_DATA" "$PG_PORT"
+  OWN_POSTGRES=1
+  ensure_database "$PG_DATA" "$PG_PORT" bandwright_test recreate
+  export DATABASE_URL="postgres://postgres@127.0.0.1:$PG_PORT/bandwright_test"
+else
+  log "using TEST_DATABASE_URL (its tables are dropped and re-created)"
+  export DATABASE_URL=$TEST_DATABASE_URL
+  node_modules/.bin/tsx scripts/reset-database.ts
+fi
+
+# The global set-up replaces these with the addresses of the processes it starts; the build needs values.
+export APP_URL=http://127.0.0.1:3999
+export SMTP_URL=smtp://127.0.0.1:2599
+node_modules/.bin/tsx scripts/migrate.ts
+
+mkdir -p "$RESULTS"
+rm -f "$RESULTS/vitest.json"
+log "building (next build)"
+node "$(next_bin)" build >"$RESULTS/build.log" 2>&1 || { tail -n 40 "$RESULTS/build.log"; die "next build failed (log: $RESULTS/build.log)"; }
+
+status=0
+node_modules/.bin/vitest run --reporter=default --reporter=json --outputFile.json="$RESULTS/vitest.json" || status=$?
+node_modules/.bin/tsx scripts/summarise-test-results.ts "$RESULTS/vitest.json" || status=1
+exit "$status"

@@ -1,0 +1,105 @@
+import { spawn, type ChildProcess } from "node:child_process";
+import { existsSync } from "node:fs";
+import type { TestProject } from "vitest/node";
+import { freePort } from "./free-port";
+
+// Starts the built app, the worker and the mail sink for the integration and browser projects, against
+// the test database in DATABASE_URL (scripts/test.sh creates it). Tests read BASE_URL and MAIL_SINK_URL
+// from process.env (or inject("baseUrl") / inject("mailSinkUrl")). Both projects share one set of
+// processes: the second project's setup finds them already running.
+
+declare module "vitest" {
+  export interface ProvidedContext {
+    baseUrl: string;
+    mailSinkUrl: string;
+  }
+}
+
+type Stack = { baseUrl: string; mailSinkUrl: string; children: ChildProcess[]; users: number };
+const globalForStack = globalThis as typeof globalThis & { bandwrightTestStack?: Promise<Stack> };
+
+function start(command: string, args: string[], env: NodeJS.ProcessEnv, label: string): ChildProcess {
+  const child = spawn(command, args, { env, stdio: ["ignore", "pipe", "pipe"] });
+  const relay = (chunk: Buffer) => {
+    if (process.env.TEST_SERVER_LOGS === "1") process.stderr.write(`[${label}] ${chunk.toString()}`);
+  };
+  child.stdout?.on("data", relay);
+  // Errors are always shown: a failing test is easier to read next to the server's stack trace.
+  child.stderr?.on("data", (chunk: Buffer) => process.stderr.write(`[${label}] ${chunk.toString()}`));
+  return child;
+}
+
+async function waitForHealth(baseUrl: string, timeoutMs: number): Promise<void> {
+  const deadline = Date.now() + timeoutMs;
+  let last = "no answer";
+  while (Date.now() < deadline) {
+    try {
+      const response = await fetch(`${baseUrl}/api/health`);
+      if (response.ok) return;
+      last = `${response.status} ${await response.text()}`;
+    } catch (error) {
+      last = String(error);
+    }
+    await new Promise((resolve) => setTimeout(resolve, 500));
+  }
+  throw new Error(`The test app at ${baseUrl} did not become healthy: ${last}`);
+}
+
+async function startStack(): Promise<Stack> {
+  if (!process.env.DATABASE_URL) throw new Error("DATABASE_URL is not set; run the suites through `npm test`.");
+  if (!existsSync(".next/BUILD_ID")) throw new Error("No production build in .next; run `npm test` (it builds first).");
+  const [appPort, smtpPort, sinkHttpPort] = [await freePort(), await freePort(), await freePort()];
+  const baseUrl = `http://127.0.0.1:${appPort}`;
+  const mailSinkUrl = `http://127.0.0.1:${sinkHttpPort}`;
+  const env: NodeJS.ProcessEnv = {
+    ...process.env,
+    NODE_ENV: "production",
+    NEXT_TELEMETRY_DISABLED: "1",
+    APP_URL: baseUrl,
+    SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
+    MAIL_SINK_URL: mailSinkUrl,
+    MAIL_SINK_SMTP_PORT: String(smtpPort),
+    MAIL_SINK_HTTP_PORT: String(sinkHttpPort),
+  };
+  const children = [
+    start("node_modules/.bin/tsx", ["scripts/mail-sink.ts"], env, "mail-sink"),
+    start("node_modules/.bin/tsx", ["workers/main.ts"], env, "worker"),
+    start("node", ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(appPort)], env, "app"),
+  ];
+  await waitForHealth(baseUrl, 90_000);
+  return { baseUrl, mailSinkUrl, children, users: 0 };
+}
+
+async function stopStack(stack: Stack): Promise<void> {
+  await Promise.all(
+    stack.children.map(
+      (child) =>
+        new Promise<void>((resolve) => {
+          if (child.exitCode !== null) return resolve();
+          const force = setTimeout(() => child.kill("SIGKILL"), 10_000);
+          child.once("exit", () => {
+            clearTimeout(force);
+            resolve();
+          });
+          child.kill("SIGTERM");
+        }),
+    ),
+  );
+}
+
+export default async function setup(project: TestProject) {
+  globalForStack.bandwrightTestStack ??= startStack();
+  const stack = await globalForStack.bandwrightTestStack;
+  stack.users += 1;
+  process.env.BASE_URL = stack.baseUrl;
+  process.env.MAIL_SINK_URL = stack.mailSinkUrl;
+  project.provide("baseUrl", stack.baseUrl);
+  project.provide("mailSinkUrl", stack.mailSinkUrl);
+  return async () => {
+    stack.users -= 1;
+    if (stack.users === 0) {
+      globalForStack.bandwrightTestStack = undefined;
+      await stopStack(stack);
+    }
+  };
+}

@@ -1,0 +1,41 @@
+import { z } from "zod";
+
+const messageSchema = z.object({
+  id: z.string(),
+  to: z.string(),
+  subject: z.string(),
+  text: z.string(),
+  html: z.string().optional(),
+  receivedAt: z.string(),
+});
+export type CapturedMail = z.infer<typeof messageSchema>;
+
+function sinkUrl(): string {
+  const url = process.env.MAIL_SINK_URL;
+  if (!url) throw new Error("MAIL_SINK_URL is not set; the integration global set-up did not run.");
+  return url;
+}
+
+/** Every message the test sink holds, newest first. */
+export async function listMail(): Promise<CapturedMail[]> {
+  const response = await fetch(`${sinkUrl()}/messages`);
+  return z.array(messageSchema).parse(await response.json());
+}
+
+/** Waits for the newest message addressed to `to` (SMTP delivery is asynchronous). */
+export async function waitForMail(to: string, timeoutMs = 10_000): Promise<CapturedMail> {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    const found = (await listMail()).find((message) => message.to.includes(to));
+    if (found) return found;
+    await new Promise((resolve) => setTimeout(resolve, 200));
+  }
+  throw new Error(`No e-mail to ${to} arrived within ${timeoutMs} ms`);
+}
+
+/** The first link in a message's text that starts with `prefix`. */
+export function linkIn(message: CapturedMail, prefix: string): string {
+  const match = message.text.match(/https?:\/\/\S+/g)?.find((link) => link.startsWith(prefix));
+  if (!match) throw new Error(`No link starting with ${prefix} in: ${message.text}`);
+  return match;
+}
