@@ -1,4 +1,5 @@
 import { randomInt, randomUUID } from "node:crypto";
+import { inject } from "vitest";
 
 /** A response as the tests look at it. */
 export type TestResponse = { status: number; body: unknown; headers: Headers };
@@ -17,7 +18,7 @@ export const testPassword = "correct-horse-battery";
 
 /**
  * One simulated browser: keeps its cookies, sends the Origin better-auth expects and its own
- * X-Forwarded-For address. Requests go to BASE_URL (set by tests/support/global-setup.ts).
+ * X-Forwarded-For address. Requests go to inject("baseUrl") (provided by tests/support/global-setup.ts).
  */
 export class TestClient {
   private readonly cookies = new Map<string, string>();
@@ -27,9 +28,8 @@ export class TestClient {
     readonly ip: string = testClientIp(),
     private readonly bearer?: string,
   ) {
-    const baseUrl = process.env.BASE_URL;
-    if (!baseUrl) throw new Error("BASE_URL is not set; the integration global set-up did not run.");
-    this.baseUrl = baseUrl;
+    // Not process.env.BASE_URL: inside test files vitest sets that to Vite's base path ("/").
+    this.baseUrl = inject("baseUrl");
   }
 
   /** Same cookies and address, but authenticating with an API key instead. */

@@ -4,9 +4,9 @@ import type { TestProject } from "vitest/node";
 import { freePort } from "./free-port";
 
 // Starts the built app, the worker and the mail sink for the integration and browser projects, against
-// the test database in DATABASE_URL (scripts/test.sh creates it). Tests read BASE_URL and MAIL_SINK_URL
-// from process.env (or inject("baseUrl") / inject("mailSinkUrl")). Both projects share one set of
-// processes: the second project's setup finds them already running.
+// the test database in DATABASE_URL (scripts/test.sh creates it). Tests read the addresses with
+// inject("baseUrl") and inject("mailSinkUrl") from vitest (process.env.BASE_URL is Vite's base path inside
+// test files). Both projects share one set of processes: the second project's setup reuses them.
 
 declare module "vitest" {
   export interface ProvidedContext {
@@ -91,8 +91,6 @@ export default async function setup(project: TestProject) {
   globalForStack.bandwrightTestStack ??= startStack();
   const stack = await globalForStack.bandwrightTestStack;
   stack.users += 1;
-  process.env.BASE_URL = stack.baseUrl;
-  process.env.MAIL_SINK_URL = stack.mailSinkUrl;
   project.provide("baseUrl", stack.baseUrl);
   project.provide("mailSinkUrl", stack.mailSinkUrl);
   return async () => {

@@ -1,3 +1,4 @@
+import { inject } from "vitest";
 import { z } from "zod";
 
 const messageSchema = z.object({
@@ -11,9 +12,7 @@ const messageSchema = z.object({
 export type CapturedMail = z.infer<typeof messageSchema>;
 
 function sinkUrl(): string {
-  const url = process.env.MAIL_SINK_URL;
-  if (!url) throw new Error("MAIL_SINK_URL is not set; the integration global set-up did not run.");
-  return url;
+  return inject("mailSinkUrl");
 }
 
 /** Every message the test sink holds, newest first. */
