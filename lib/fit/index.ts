@@ -1,0 +1,3 @@
+export * from "./least-squares";
+export * from "./random";
+export * from "./bands";
