@@ -3,11 +3,13 @@
 import {
   BOND_TYPES,
   type ModelDocument,
+  type OrbitalShell,
   type Vec3,
   bandsWithGradients,
   buildTemplate,
   compileModel,
   computeBands,
+  orbitalShell,
   prepareHamiltonian,
   templateKPath,
 } from "../../lib/tb";
@@ -27,8 +29,9 @@ function median(repeat: number, work: () => void): number {
 /** Diamond with a chosen orbital set per site: sp3 (8 orbitals) or spd (18), nearest neighbours. */
 function diamondWith(orbitals: ModelDocument["sites"][number]["orbitals"]): ModelDocument {
   const base = buildTemplate("diamond-sp3s-star");
-  const shells = new Set(orbitals.map((o) => (o.startsWith("p") ? "p" : o.startsWith("d") ? "d" : o)));
-  const bonds = BOND_TYPES.filter((b) => !b.includes("*") && [...b.split("_")[0]].every((s) => shells.has(s)));
+  const shells = new Set(orbitals.map(orbitalShell));
+  // bond types whose two shell letters (e.g. "pd" in "pd_pi") are both present; no s* here
+  const bonds = BOND_TYPES.filter((b) => !b.includes("*") && [...b.split("_")[0]].every((s) => shells.has(s as OrbitalShell)));
   return {
     ...base,
     sites: base.sites.map((s) => ({ ...s, orbitals })),

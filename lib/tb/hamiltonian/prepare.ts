@@ -65,19 +65,40 @@ function prepareMatrix(compiled: CompiledModel, kPoints: readonly Vec3[], matrix
     }
     return slot;
   });
+  // Many terms share a bond vector (all orbital pairs of one bond): evaluate each phase once per k.
+  const bondOf = new Map<string, number>();
+  const bonds: Vec3[] = [];
+  const termBond = terms.map((t) => {
+    const key = t.bond.join(",");
+    let index = bondOf.get(key);
+    if (index === undefined) {
+      index = bonds.length;
+      bondOf.set(key, index);
+      bonds.push(t.bond);
+    }
+    return index;
+  });
   const slotCount = entries.length;
   const coefficients = new Float64Array(kPoints.length * slotCount * 2);
-  kPoints.forEach((k, ki) => {
+  const cos = new Float64Array(bonds.length);
+  const sin = new Float64Array(bonds.length);
+  for (let ki = 0; ki < kPoints.length; ki++) {
+    const k = kPoints[ki];
+    for (let b = 0; b < bonds.length; b++) {
+      const phase = k[0] * bonds[b][0] + k[1] * bonds[b][1] + k[2] * bonds[b][2];
+      cos[b] = Math.cos(phase);
+      sin[b] = Math.sin(phase);
+    }
     const base = ki * slotCount * 2;
-    terms.forEach((t, ti) => {
-      const phase = k[0] * t.bond[0] + k[1] * t.bond[1] + k[2] * t.bond[2];
-      const c = Math.cos(phase);
-      const s = Math.sin(phase);
+    for (let ti = 0; ti < terms.length; ti++) {
+      const t = terms[ti];
+      const c = cos[termBond[ti]];
+      const s = sin[termBond[ti]];
       const at = base + termSlot[ti] * 2;
       coefficients[at] += t.re * c - t.im * s;
       coefficients[at + 1] += t.re * s + t.im * c;
-    });
-  });
+    }
+  }
   return { entry: Int32Array.from(entries), parameter: Int32Array.from(parameters), coefficients, slotCount };
 }
 
