@@ -1,11 +1,12 @@
 import { bandColour } from "@/components/charts";
+import { formatQuantity } from "@/components/format";
 
 // A decorative sketch for the landing page: nearest-neighbour square-lattice bands
 // E(k) = e0 − 2t(cos kx + cos ky) (textbook tight-binding, e.g. Ashcroft & Mermin ch. 10) along Γ–X–M–Γ,
 // drawn as model lines with a few "measured" points on top.
 const width = 360;
 const height = 200;
-const pad = { left: 34, right: 10, top: 10, bottom: 24 };
+const pad = { left: 44, right: 10, top: 10, bottom: 24 };
 const segments = [
   { from: [0, 0], to: [Math.PI, 0] },
   { from: [Math.PI, 0], to: [Math.PI, Math.PI] },
@@ -16,6 +17,7 @@ const bands = [
   { e0: 0.9, t: -0.3 },
   { e0: 2.2, t: 0.2 },
 ];
+const energyTicks = [-2, 0, 2];
 const eMin = -2.6;
 const eMax = 3.6;
 
@@ -65,8 +67,16 @@ export function BandSketch() {
           </text>
         </g>
       ))}
-      <text x={10} y={height / 2} transform={`rotate(-90 10 ${height / 2})`} textAnchor="middle" className="fill-ink-muted text-[10px]">
-        E − E_F (eV)
+      {energyTicks.map((e) => (
+        <g key={e}>
+          <line x1={pad.left - 4} x2={pad.left} y1={toY(e)} y2={toY(e)} stroke="#74818a" />
+          <text x={pad.left - 6} y={toY(e) + 3.5} textAnchor="end" className="fill-ink-muted text-[10px]">
+            {formatQuantity(e, { decimals: 0 })}
+          </text>
+        </g>
+      ))}
+      <text x={11} y={height / 2} transform={`rotate(-90 11 ${height / 2})`} textAnchor="middle" className="fill-ink-muted text-[10px]">
+        E − E<tspan baselineShift="sub" fontSize="7">F</tspan> (eV)
       </text>
       {bands.map((band, b) => (
         <g key={b}>

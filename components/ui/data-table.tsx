@@ -21,6 +21,8 @@ import { cx } from "./class-names";
 export interface DataColumnMeta {
   /** Right-align with tabular figures (numbers with units). */
   numeric?: boolean;
+  /** Tabular figures without right alignment (dates, times). */
+  figures?: boolean;
   /** Right-align without number styling (row actions). */
   alignEnd?: boolean;
   /** Screen-reader-only header text for columns whose visible header is empty (row actions). */
@@ -146,6 +148,7 @@ export function DataTable<Row extends RowData>({
                     className={cx(
                       "px-4 py-2 align-middle",
                       cell.column.columnDef.meta?.numeric && "text-right tabular-nums",
+                      cell.column.columnDef.meta?.figures && "tabular-nums",
                       cell.column.columnDef.meta?.alignEnd && "text-right",
                     )}
                   >

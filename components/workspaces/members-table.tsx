@@ -21,7 +21,12 @@ const baseColumns = helper.columns([
   helper.accessor("name", { header: "Name", sortFn: "text" }),
   helper.accessor("email", { header: "E-mail", sortFn: "text" }),
   helper.accessor("role", { header: "Role", cell: (info) => <RoleBadge role={info.getValue()} />, sortFn: "text" }),
-  helper.accessor("joinedAt", { header: "Joined", cell: (info) => formatDate(info.getValue()), sortFn: "datetime" }),
+  helper.accessor("joinedAt", {
+    header: "Joined",
+    cell: (info) => formatDate(info.getValue()),
+    sortFn: "datetime",
+    meta: { figures: true },
+  }),
 ]);
 
 interface MembersTableProps {
