@@ -20,10 +20,11 @@ async function main(): Promise<void> {
   await boss.start();
   await createQueues(boss);
 
-  await boss.work(healthQueue.name, { pollingIntervalSeconds: 0.5, batchSize: 5 }, async (jobs) => {
-    const output: HealthJobOutput = { worker: workerName, answeredAt: new Date().toISOString() };
-    return output;
-  });
+  // Resolving completes every job of the batch with this output.
+  await boss.work(healthQueue.name, { pollingIntervalSeconds: 0.5, batchSize: 5 }, async (): Promise<HealthJobOutput> => ({
+    worker: workerName,
+    answeredAt: new Date().toISOString(),
+  }));
   console.log(`worker ${workerName}: listening on queue ${healthQueue.name}`);
 
   let stopping = false;
