@@ -42,7 +42,9 @@ export {
 export {
   type PreparedHamiltonian,
   type PreparedMatrix,
+  assembleHamiltonian,
   assembleMatrix,
+  assembleOverlap,
   hamiltonianAt,
   hamiltonianDerivativeAt,
   overlapAt,

@@ -188,3 +188,22 @@ function matrixAt(compiled: CompiledModel, theta: ArrayLike<number>, k: Vec3, ma
   assembleMatrix(prepared, 0, Float64Array.from(theta), m.re, m.im, matrix === "overlap", compiled.orbitalCount);
   return m;
 }
+
+/**
+ * Writes H(k_kIndex; θ) (eV) into `into` without allocating: the fitting loop's assembly step.
+ * @param theta - parameter vector in `compiled.parameters` order
+ */
+export function assembleHamiltonian(prepared: PreparedHamiltonian, kIndex: number, theta: Float64Array, into: ComplexMatrix): void {
+  assembleMatrix(prepared.hamiltonian, kIndex, theta, into.re, into.im, false, prepared.orbitalCount);
+}
+
+/** Writes S(k_kIndex; θ) (dimensionless; the identity for an orthogonal model) into `into` without allocating. */
+export function assembleOverlap(prepared: PreparedHamiltonian, kIndex: number, theta: Float64Array, into: ComplexMatrix): void {
+  const n = prepared.orbitalCount;
+  if (prepared.overlap) assembleMatrix(prepared.overlap, kIndex, theta, into.re, into.im, true, n);
+  else {
+    into.re.fill(0);
+    into.im.fill(0);
+    for (let i = 0; i < n; i++) into.re[i * n + i] = 1;
+  }
+}

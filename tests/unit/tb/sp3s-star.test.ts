@@ -39,3 +39,26 @@ describe("sp3s* silicon (Vogl–Hjalmarson–Dow 1983)", () => {
     expect(where).toBeCloseTo(0.731, 2);
   });
 });
+
+describe("sp3s* zinc-blende at Γ", () => {
+  it("gives the 2×2 closed forms of the s and p blocks from its own parameters", () => {
+    // At Γ all four neighbour phases are 1, so each anion–cation pair of like orbitals forms a 2×2 block:
+    // E = (E_a + E_c)/2 ± √(((E_a − E_c)/2)² + V²) with V = 4V_ssσ (s) and V = (4/3)(V_ppσ + 2V_ppπ) (p)
+    // (Vogl, Hjalmarson & Dow 1983, Γ-point expressions; from memory). s* does not couple at Γ.
+    const doc = buildTemplate("zincblende-sp3s-star");
+    const p = (name: string) => doc.parameters.find((x) => x.name === name)!.value;
+    const pair = (ea: number, ec: number, v: number) => {
+      const mid = (ea + ec) / 2;
+      const half = Math.hypot((ea - ec) / 2, v);
+      return [mid - half, mid + half];
+    };
+    const [s1, s2] = pair(p("E_s[As]"), p("E_s[Ga]"), 4 * p("V_ss_sigma[As-Ga,1]"));
+    const [p1, p2] = pair(p("E_p[As]"), p("E_p[Ga]"), (4 / 3) * (p("V_pp_sigma[As-Ga,1]") + 2 * p("V_pp_pi[As-Ga,1]")));
+    const expected = [s1, s2, p1, p1, p1, p2, p2, p2, p("E_s*[As]"), p("E_s*[Ga]")].sort((a, b) => a - b);
+    const energies = Array.from(computeBands(compileModel(doc), undefined, [[0, 0, 0]]).energies);
+    expect(energies).toEqual(expected.map((e) => expect.closeTo(e, 10)));
+    // combined elements recovered from the converted bond integrals (Vogl et al. 1983 GaAs, from memory)
+    expect(4 * p("V_ss_sigma[As-Ga,1]")).toBeCloseTo(-6.4513, 10);
+    expect((4 / Math.sqrt(3)) * p("V_sp_sigma[Ga-As,1]")).toBeCloseTo(5.7839, 10);
+  });
+});
