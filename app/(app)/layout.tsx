@@ -1,5 +1,6 @@
 import type { ReactNode } from "react";
 import { AppHeader } from "@/components/shell/app-header";
+import { SkipLink } from "@/components/shell/skip-link";
 import { getCurrentUser } from "@/lib/server/session";
 
 export const dynamic = "force-dynamic";
@@ -9,8 +10,11 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
   const user = await getCurrentUser();
   return (
     <div className="flex min-h-screen flex-col">
+      <SkipLink />
       <AppHeader user={user} />
-      <div className="flex-1">{children}</div>
+      <div id="content" tabIndex={-1} className="flex-1 outline-none">
+        {children}
+      </div>
     </div>
   );
 }
