@@ -6,10 +6,12 @@ import { issueApiKey } from "@/lib/server/api-keys";
 
 // npm run api-key -- <member e-mail> <workspace slug> [label]
 // Prints a new key once; only its SHA-256 is stored. The key acts as that member, in that workspace only.
-const [email, slug, label = "script"] = z
-  .tuple([z.email(), z.string().min(1)])
-  .rest(z.string())
-  .parse(process.argv.slice(2), { error: () => "usage: npm run api-key -- <member e-mail> <workspace slug> [label]" });
+const args = z.tuple([z.email(), z.string().min(1)]).rest(z.string()).safeParse(process.argv.slice(2));
+if (!args.success) {
+  console.error("usage: npm run api-key -- <member e-mail> <workspace slug> [label]");
+  process.exit(2);
+}
+const [email, slug, label = "script"] = args.data;
 
 const user = await getUserByEmail(email);
 const workspace = await getWorkspaceBySlug(slug);
