@@ -28,3 +28,6 @@ export {
   type ParsedBandFitInput,
   type TemplateModelSpec,
 } from "./schema";
+export { BandFitError, runBandFit } from "./run";
+export { type BandFitValidation, type PreparedBandFit, validateBandFit } from "./validate";
+export { ENERGY_OFFSET, RENORMALISATION } from "./problem";

@@ -1,0 +1,134 @@
+import { type PreparedHamiltonian, bandsWithGradients } from "@/lib/tb";
+import type { LeastSquaresProblem, ParameterSpec, ValuesWithJacobian } from "../least-squares";
+import type { KeptPoint } from "./points";
+import type { BandMapping } from "./schema";
+
+/** Names of the two global parameters in results and warnings. */
+export const ENERGY_OFFSET = "energy offset";
+export const RENORMALISATION = "renormalisation";
+
+/** Where the global parameters sit in θ: after the model's own parameters. */
+export interface GlobalParameterSlots {
+  offset: number;
+  renormalisation: number;
+  /** E_ref of the renormalisation, eV */
+  reference: number;
+}
+
+/** Predicted energies at one θ, with the model band each point was compared with (0-based). */
+export interface Prediction {
+  values: Float64Array;
+  modelBands: Int32Array;
+}
+
+/**
+ * The band fit as a least-squares problem. θ = [model parameters…, δ, Z]; for point p at k-point g
+ *   f_p(θ) = E_ref + (E_m(p)(k_g) − E_ref)/Z + δ,
+ * with m(p) fixed by the offset mapping, or, for the nearest mapping, the band among the candidates
+ * whose f is closest to the data energy at the θ being evaluated.
+ *
+ * Jacobian: ∂f_p/∂θ_i = (1/Z)·∂E_m/∂θ_i from Hellmann–Feynman (`bandsWithGradients`: one diagonalisation
+ * per distinct k-point per evaluation, shared by every point at that k), ∂f_p/∂δ = 1,
+ * ∂f_p/∂Z = −(E_m − E_ref)/Z². For the nearest mapping the assignment m(p) is held fixed while
+ * differentiating: the objective is piecewise smooth and this is its derivative wherever the assignment
+ * does not switch (finite differences agree there).
+ */
+export class BandResidualModel {
+  private readonly modelParameterCount: number;
+  private readonly bandCount: number;
+  private readonly energies: Float64Array;
+  private readonly gradients: Float64Array;
+  private readonly values: Float64Array;
+  private readonly jacobian: Float64Array;
+  private readonly candidates: [number, number];
+
+  constructor(
+    private readonly hamiltonian: PreparedHamiltonian,
+    private readonly points: readonly KeptPoint[],
+    private readonly slots: GlobalParameterSlots,
+    mapping: BandMapping,
+  ) {
+    this.modelParameterCount = hamiltonian.parameterCount;
+    this.bandCount = hamiltonian.orbitalCount;
+    const nk = hamiltonian.kPoints.length;
+    this.energies = new Float64Array(nk * this.bandCount);
+    this.gradients = new Float64Array(nk * this.bandCount * this.modelParameterCount);
+    // The engine copies (whitens) values and Jacobians on receipt, so these buffers are reused.
+    this.values = new Float64Array(points.length);
+    this.jacobian = new Float64Array(points.length * (this.modelParameterCount + 2));
+    const range = mapping.kind === "nearest" ? (mapping.modelBands ?? [1, this.bandCount]) : [1, this.bandCount];
+    this.candidates = [range[0] - 1, range[1] - 1];
+  }
+
+  /** The problem for the least-squares engine. */
+  problem(parameters: ParameterSpec[]): LeastSquaresProblem {
+    return {
+      parameters,
+      observed: this.points.map((p) => p.energy),
+      sigma: this.points.map((p) => p.sigma),
+      evaluate: (theta) => this.predict(theta).values,
+      evaluateWithJacobian: (theta) => this.valuesWithJacobian(theta),
+    };
+  }
+
+  /** Predicted energies (eV) and the model band of every point at θ. */
+  predict(theta: Float64Array): Prediction {
+    this.solve(theta, false);
+    const modelBands = new Int32Array(this.points.length);
+    this.fill(theta, modelBands);
+    return { values: this.values, modelBands };
+  }
+
+  private valuesWithJacobian(theta: Float64Array): ValuesWithJacobian {
+    this.solve(theta, true);
+    const modelBands = new Int32Array(this.points.length);
+    this.fill(theta, modelBands);
+    const np = this.modelParameterCount;
+    const width = np + 2;
+    const z = theta[this.slots.renormalisation];
+    const reference = this.slots.reference;
+    const { gradients, energies, jacobian, bandCount } = this;
+    this.points.forEach((point, i) => {
+      const band = modelBands[i];
+      const source = (point.kIndex * bandCount + band) * np;
+      const row = i * width;
+      for (let j = 0; j < np; j++) jacobian[row + j] = gradients[source + j] / z;
+      jacobian[row + this.slots.offset] = 1;
+      jacobian[row + this.slots.renormalisation] = -(energies[point.kIndex * bandCount + band] - reference) / (z * z);
+    });
+    return { values: this.values, jacobian };
+  }
+
+  private solve(theta: Float64Array, withGradients: boolean): void {
+    bandsWithGradients(this.hamiltonian, theta.subarray(0, this.modelParameterCount), {
+      gradients: withGradients,
+      energiesInto: this.energies,
+      gradientsInto: withGradients ? this.gradients : undefined,
+    });
+  }
+
+  private fill(theta: Float64Array, modelBands: Int32Array): void {
+    const delta = theta[this.slots.offset];
+    const z = theta[this.slots.renormalisation];
+    const reference = this.slots.reference;
+    const { energies, values, bandCount } = this;
+    const [low, high] = this.candidates;
+    this.points.forEach((point, i) => {
+      const base = point.kIndex * bandCount;
+      let band = point.modelBand;
+      if (band < 0) {
+        band = low;
+        let best = Infinity;
+        for (let m = low; m <= high; m++) {
+          const distance = Math.abs(reference + (energies[base + m] - reference) / z + delta - point.energy);
+          if (distance < best) {
+            best = distance;
+            band = m;
+          }
+        }
+      }
+      modelBands[i] = band;
+      values[i] = reference + (energies[base + band] - reference) / z + delta;
+    });
+  }
+}

@@ -1,0 +1,116 @@
+import type { LeastSquaresResult } from "../least-squares";
+import type { PreparedBandFit } from "./validate";
+import type { BandFitResult, BandFitWarning } from "./schema";
+
+/** One iteration as recorded for the convergence trace. */
+export interface TraceEntry {
+  start: number;
+  iteration: number;
+  chiSquared: number;
+  damping: number;
+}
+
+// Warnings that name a parameter the data do not determine: its value is not a result.
+const UNDETERMINING: readonly BandFitWarning["kind"][] = ["no-effect", "undetermined"];
+
+/**
+ * Turns the engine's result into the band fit's: parameters with units and starts (global ones only
+ * when free or not neutral), residuals and per-band statistics in eV, the correlation matrix, the trace
+ * of the best start, and the model document with the fitted values.
+ */
+export function assembleBandFitResult(
+  prepared: PreparedBandFit,
+  fit: LeastSquaresResult,
+  trace: readonly TraceEntry[],
+  fitMs: number,
+): BandFitResult {
+  const { parameters: specs, units, selection, residualModel, compiled } = prepared;
+  const warnings: BandFitWarning[] = [...prepared.warnings, ...fit.warnings];
+  const undetermined = new Set(warnings.filter((w) => UNDETERMINING.includes(w.kind)).flatMap((w) => w.parameters));
+  const modelCount = compiled.parameters.length;
+
+  const parameters = fit.parameters
+    .map((p, j) => ({
+      name: p.name,
+      value: p.value,
+      standardError: p.standardError,
+      start: specs[j].initial,
+      ...(specs[j].lower !== undefined ? { min: specs[j].lower } : {}),
+      ...(specs[j].upper !== undefined ? { max: specs[j].upper } : {}),
+      free: p.free,
+      determined: p.free && p.standardError !== null && !undetermined.has(p.name),
+      unit: units[j],
+      atBound: p.atBound,
+    }))
+    .filter((p, j) => j < modelCount || p.free || p.value !== (j === modelCount ? 0 : 1));
+
+  const theta = Float64Array.from(fit.parameters, (p) => p.value);
+  const { modelBands } = residualModel.predict(theta);
+  const residuals = selection.kept.map((point, i) => {
+    const modelEnergy = fit.modelValues[i];
+    return {
+      pointIndex: point.pointIndex,
+      dataBand: point.dataBand,
+      modelBand: modelBands[i] + 1,
+      energy: point.energy,
+      modelEnergy,
+      residual: modelEnergy - point.energy,
+      weightedResidual: fit.residuals[i],
+    };
+  });
+
+  const byBand = new Map<number, number[]>();
+  residuals.forEach((r) => byBand.set(r.dataBand, [...(byBand.get(r.dataBand) ?? []), r.residual]));
+  const bands = [...byBand.entries()]
+    .sort(([a], [b]) => a - b)
+    .map(([dataBand, values]) => {
+      const first = selection.kept.find((p) => p.dataBand === dataBand)!;
+      return { dataBand, modelBand: first.modelBand >= 0 ? first.modelBand + 1 : null, points: values.length, ...summary(values) };
+    });
+  const overall = summary(residuals.map((r) => r.residual));
+
+  const bestTrace = trace
+    .filter((t) => t.start === fit.bestStart && Number.isFinite(t.chiSquared) && Number.isFinite(t.damping))
+    .map(({ iteration, chiSquared, damping }) => ({ iteration, chiSquared, damping }));
+  const fitted = new Map(fit.parameters.map((p) => [p.name, p.value]));
+
+  return {
+    parameters,
+    chiSquared: fit.chiSquared,
+    reducedChiSquared: fit.reducedChiSquared,
+    rms: overall.rms,
+    maxAbsResidual: overall.maxAbs,
+    weightedRms: Math.sqrt(fit.chiSquared / fit.observations),
+    bands,
+    residuals,
+    pointsUsed: selection.kept.length,
+    pointsDropped: { ...selection.dropped },
+    correlation: { names: fit.freeParameters, matrix: fit.correlation },
+    trace: bestTrace,
+    iterations: fit.iterations,
+    stopReason: fit.stopReason,
+    converged: fit.converged,
+    cancelled: fit.cancelled,
+    warnings,
+    starts: fit.starts.map((s) => ({ ...s })),
+    fitMs,
+    fittedModel: {
+      ...prepared.document,
+      parameters: prepared.document.parameters.map((p) => ({ ...p, value: fitted.get(p.name) ?? p.value })),
+    },
+  };
+}
+
+/** RMS, max |x| and mean of residuals, eV. */
+function summary(values: number[]): { rms: number; maxAbs: number; mean: number } {
+  if (values.length === 0) return { rms: 0, maxAbs: 0, mean: 0 };
+  let squares = 0;
+  let maxAbs = 0;
+  let sum = 0;
+  for (const v of values) {
+    squares += v * v;
+    maxAbs = Math.max(maxAbs, Math.abs(v));
+    sum += v;
+  }
+  return { rms: Math.sqrt(squares / values.length), maxAbs, mean: sum / values.length };
+}
