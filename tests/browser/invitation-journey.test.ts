@@ -50,6 +50,14 @@ describe("sign-up, workspace, invitation and viewer access in the browser", () =
     expect(await page.getByRole("link", { name: "Create an account" }).count()).toBe(1);
     expect(await page.getByRole("link", { name: "Sign in" }).count()).toBeGreaterThan(0);
     await screenshot(page, "01-landing");
+
+    // Keyboard users land on the skip link first, then move through the page with a visible focus ring.
+    await page.keyboard.press("Tab");
+    expect(await page.evaluate(() => document.activeElement?.textContent)).toBe("Skip to content");
+    await page.keyboard.press("Tab");
+    await page.keyboard.press("Tab");
+    expect(await page.evaluate(() => document.activeElement?.textContent)).toBe("Create an account");
+    await screenshot(page, "01b-landing-keyboard-focus");
     await page.context().close();
   });
 
