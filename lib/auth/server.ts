@@ -87,5 +87,3 @@ export const auth = betterAuth({
     nextCookies(),
   ],
 });
-
-export type Auth = typeof auth;
