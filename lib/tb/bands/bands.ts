@@ -67,7 +67,7 @@ function solveAt(prepared: PreparedHamiltonian, w: Workspace, kIndex: number, th
   } else w.standard.solve(w.hRe, w.hIm, w.eigen, withVectors);
 }
 
-/** Adds scale × Re⟨ψ_n|∂M/∂θ_p|ψ_n⟩ into `gradients` for every band n and slot. */
+/** Adds scale × Re⟨ψ_n|∂M/∂θ_p|ψ_n⟩ into `gradients` for every band n and parameter p. */
 function accumulateExpectation(
   matrix: PreparedMatrix,
   kIndex: number,
@@ -78,15 +78,17 @@ function accumulateExpectation(
   offset: number,
   energyWeighted: boolean,
 ) {
-  const { entry, parameter, coefficients, slotCount } = matrix;
+  const { entry, parameter, coefficients, slotCount, upperSlots } = matrix;
   const base = kIndex * slotCount * 2;
   const vr = eigen.vectorsRe;
   const vi = eigen.vectorsIm;
+  const count = upperSlots.length;
   for (let band = 0; band < n; band++) {
     const vb = band * n;
     const scale = energyWeighted ? -eigen.values[band] : 1;
     const out = offset + band * np;
-    for (let s = 0; s < slotCount; s++) {
+    for (let u = 0; u < count; u++) {
+      const s = upperSlots[u];
       const e = entry[s];
       const i = (e / n) | 0;
       const j = e - i * n;
@@ -96,7 +98,8 @@ function accumulateExpectation(
       const bi = vi[vb + j];
       const x = cr * br - ci * bi;
       const y = cr * bi + ci * br;
-      gradients[out + parameter[s]] += scale * (vr[vb + i] * x + vi[vb + i] * y);
+      // Re(conj ψ_i c ψ_j); the mirror slot (j, i) holds conj(c) and adds the same amount.
+      gradients[out + parameter[s]] += (i === j ? scale : 2 * scale) * (vr[vb + i] * x + vi[vb + i] * y);
     }
   }
 }

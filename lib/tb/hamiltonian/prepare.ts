@@ -16,6 +16,11 @@ export interface PreparedMatrix {
   /** per k-point, per slot: re, im interleaved (length nk × slots × 2) */
   readonly coefficients: Float64Array;
   readonly slotCount: number;
+  /**
+   * Slots on or above the diagonal (i ≤ j). A slot below the diagonal holds the complex conjugate of its
+   * mirror slot, so expectation values ⟨ψ|∂M/∂θ|ψ⟩ need only these, off-diagonal ones counted twice.
+   */
+  readonly upperSlots: Int32Array;
 }
 
 /** H (and S) coefficients for a fixed list of k-points, ready for fast assembly at any θ. */
@@ -99,7 +104,8 @@ function prepareMatrix(compiled: CompiledModel, kPoints: readonly Vec3[], matrix
       coefficients[at + 1] += t.re * s + t.im * c;
     }
   }
-  return { entry: Int32Array.from(entries), parameter: Int32Array.from(parameters), coefficients, slotCount };
+  const upperSlots = Int32Array.from(entries.map((e, slot) => ({ e, slot })).filter(({ e }) => Math.floor(e / n) <= e % n).map(({ slot }) => slot));
+  return { entry: Int32Array.from(entries), parameter: Int32Array.from(parameters), coefficients, slotCount, upperSlots };
 }
 
 /**
