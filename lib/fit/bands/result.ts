@@ -10,8 +10,8 @@ export interface TraceEntry {
   damping: number;
 }
 
-// Warnings that name a parameter the data do not determine: its value is not a result.
-const UNDETERMINING: readonly BandFitWarning["kind"][] = ["no-effect", "undetermined"];
+// Warnings that name a parameter whose value the data do not set (a bound does, or nothing does): not a result.
+const UNDETERMINING: readonly BandFitWarning["kind"][] = ["no-effect", "undetermined", "at-bound"];
 
 /**
  * Turns the engine's result into the band fit's: parameters with units and starts (global ones only

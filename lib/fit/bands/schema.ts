@@ -251,7 +251,7 @@ export const bandFitResultSchema = z.object({
       min: finite.optional(),
       max: finite.optional(),
       free: z.boolean(),
-      /** false for a free parameter the data do not determine: its value is not a fit result */
+      /** false for a free parameter the data do not determine (no effect, undetermined, or held by a bound): not a fit result */
       determined: z.boolean(),
       unit: z.enum(["eV", "1"]),
       atBound: z.enum(["lower", "upper"]).nullable(),
