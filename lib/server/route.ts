@@ -7,7 +7,8 @@ import { parseInput } from "./parse-input";
 import type { Principal } from "./principal";
 import { authorizeWorkspace, requirePrincipal, type WorkspaceAccess } from "./workspace-access";
 
-type SlugContext = { params: Promise<{ slug: string }> };
+/** Next passes the dynamic segments of the route; every workspace route has `slug`, nested ones more. */
+type WorkspaceRouteContext = { params: Promise<{ slug: string } & Record<string, string>> };
 
 /** Largest JSON body a route accepts, bytes (these routes carry a few fields; uploads have their own). */
 const maxJsonBytes = 64 * 1024;
@@ -68,15 +69,21 @@ export function userRoute<S extends z.ZodType | undefined = undefined>(
  */
 export function workspaceRoute<S extends z.ZodType | undefined = undefined>(
   options: InputOption<S> & { minimumRole: WorkspaceRole },
-  handler: (context: { access: WorkspaceAccess; input: ParsedInput<S>; request: Request }) => Promise<HandlerResult>,
+  handler: (context: {
+    access: WorkspaceAccess;
+    input: ParsedInput<S>;
+    request: Request;
+    /** The route's dynamic segments (`slug` and any nested ones such as `id`). */
+    params: Record<string, string>;
+  }) => Promise<HandlerResult>,
 ) {
-  return async (request: Request, context: SlugContext): Promise<Response> => {
+  return async (request: Request, context: WorkspaceRouteContext): Promise<Response> => {
     try {
       const principal = await requirePrincipal(request.headers);
-      const { slug } = await context.params;
-      const access = await authorizeWorkspace(principal, slug, options.minimumRole);
+      const params = await context.params;
+      const access = await authorizeWorkspace(principal, params.slug, options.minimumRole);
       const input = await parseBody(request, options.input as S);
-      return toResponse(await handler({ access, input, request }));
+      return toResponse(await handler({ access, input, request, params }));
     } catch (thrown) {
       return errorResponse(thrown);
     }
