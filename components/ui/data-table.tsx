@@ -147,9 +147,9 @@ export function DataTable<Row extends RowData>({
                     key={cell.id}
                     className={cx(
                       "px-4 py-2 align-middle",
-                      cell.column.columnDef.meta?.numeric && "text-right tabular-nums",
-                      cell.column.columnDef.meta?.figures && "tabular-nums",
-                      cell.column.columnDef.meta?.alignEnd && "text-right",
+                      cell.column.columnDef.meta?.numeric && "whitespace-nowrap text-right tabular-nums",
+                      cell.column.columnDef.meta?.figures && "whitespace-nowrap tabular-nums",
+                      cell.column.columnDef.meta?.alignEnd && "whitespace-nowrap text-right",
                     )}
                   >
                     <table.FlexRender cell={cell} />

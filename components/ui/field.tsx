@@ -48,19 +48,29 @@ export function Field({ id, label, hint, errors, optional, children, className }
   );
 }
 
+/** Control height: "regular" in forms, "compact" inside table rows. Width comes from the caller. */
+export type ControlDensity = "regular" | "compact";
+
 const controlClasses =
-  "h-9 w-full rounded-md border border-line-strong bg-surface px-2.5 text-base text-ink shadow-inner shadow-black/[0.02] " +
+  "rounded-md border border-line-strong bg-surface text-ink shadow-inner shadow-black/[0.02] " +
   "placeholder:text-ink-faint focus-visible:border-accent-600 aria-invalid:border-danger-600 " +
   "disabled:bg-surface-sunken disabled:text-ink-faint";
 
+const densityClasses: Record<ControlDensity, string> = {
+  regular: "h-9 px-2.5 text-base",
+  compact: "h-7 px-2 text-sm",
+};
+
+type ControlProps<T extends "input" | "select"> = ComponentProps<T> & { density?: ControlDensity };
+
 /** A bare text input with the kit's look. Prefer {@link TextField}, which adds the label. */
-export function Input({ className, ...rest }: ComponentProps<"input">) {
-  return <input className={cx(controlClasses, className)} {...rest} />;
+export function Input({ className, density = "regular", ...rest }: ControlProps<"input">) {
+  return <input className={cx(controlClasses, densityClasses[density], className)} {...rest} />;
 }
 
 /** A bare native select with the kit's look. Prefer {@link SelectField}, which adds the label. */
-export function Select({ className, ...rest }: ComponentProps<"select">) {
-  return <select className={cx(controlClasses, "pr-8", className)} {...rest} />;
+export function Select({ className, density = "regular", ...rest }: ControlProps<"select">) {
+  return <select className={cx(controlClasses, densityClasses[density], "pr-7", className)} {...rest} />;
 }
 
 type FieldFrameProps = Pick<FieldProps, "label" | "hint" | "errors" | "optional" | "className"> & { name: string; id?: string };
@@ -71,7 +81,16 @@ type TextFieldProps = FieldFrameProps & Omit<ComponentProps<"input">, "id" | "na
 export function TextField({ label, hint, errors, optional, className, name, id, ...input }: TextFieldProps) {
   return (
     <Field id={id ?? name} label={label} hint={hint} errors={errors} optional={optional} className={className}>
-      {(d) => <Input id={d.id} name={name} aria-describedby={d.describedBy} aria-invalid={d.invalid || undefined} {...input} />}
+      {(d) => (
+        <Input
+          id={d.id}
+          name={name}
+          className="w-full"
+          aria-describedby={d.describedBy}
+          aria-invalid={d.invalid || undefined}
+          {...input}
+        />
+      )}
     </Field>
   );
 }
@@ -89,7 +108,14 @@ export function SelectField({ label, hint, errors, optional, className, name, id
   return (
     <Field id={id ?? name} label={label} hint={hint} errors={errors} optional={optional} className={className}>
       {(d) => (
-        <Select id={d.id} name={name} aria-describedby={d.describedBy} aria-invalid={d.invalid || undefined} {...select}>
+        <Select
+          id={d.id}
+          name={name}
+          className="w-full"
+          aria-describedby={d.describedBy}
+          aria-invalid={d.invalid || undefined}
+          {...select}
+        >
           {options.map((o) => (
             <option key={o.value} value={o.value}>
               {o.label}

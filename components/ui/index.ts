@@ -3,7 +3,7 @@ export { Button, ButtonLink, buttonClasses } from "./button";
 export type { ButtonSize, ButtonVariant } from "./button";
 export { SubmitButton } from "./submit-button";
 export { Field, Input, Select, SelectField, TextField } from "./field";
-export type { FieldDescription, SelectOption } from "./field";
+export type { ControlDensity, FieldDescription, SelectOption } from "./field";
 export { Panel } from "./panel";
 export { PageHeader } from "./page-header";
 export { EmptyState } from "./empty-state";

@@ -38,7 +38,7 @@ export function MemberActions({ slug, memberId, name, role }: MemberActionsProps
           <label htmlFor={selectId} className="sr-only">
             Role of {name}
           </label>
-          <Select id={selectId} name="role" defaultValue={role} className="h-7 w-28 text-sm">
+          <Select id={selectId} name="role" defaultValue={role} density="compact" className="w-24">
             {shortRoleOptions.map((o) => (
               <option key={o.value} value={o.value}>
                 {o.label}

@@ -124,6 +124,31 @@ describe("sign-up, workspace, invitation and viewer access in the browser", () =
     await page.context().close();
   });
 
+  it("lets the owner sign in again, promote the colleague to editor and then remove them", async () => {
+    const page = await newIsolatedPage(browser, problems);
+    await page.goto(`${workspacePath}/members`);
+    // Signed out: the guard sends the owner to sign in and back.
+    await page.waitForURL("**/sign-in?next=*");
+    await page.getByLabel("E-mail").fill(owner.email);
+    await page.getByLabel("Password").fill(owner.password);
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await page.waitForURL(`**${workspacePath}`);
+    await page.goto(`${workspacePath}/members`);
+
+    const colleagueRow = page.getByRole("row", { name: new RegExp(colleague.email.replace(/[.+]/g, "\\$&")) });
+    await colleagueRow.getByLabel(`Role of ${colleague.name}`).selectOption("editor");
+    await colleagueRow.getByRole("button", { name: `Save role of ${colleague.name}` }).click();
+    // The role column (third cell) shows the badge; the row's select also lists every role, so read the cell.
+    await expect.poll(() => colleagueRow.getByRole("cell").nth(2).textContent(), { timeout: 10_000 }).toBe("Editor");
+    await screenshot(page, "10-members-owner-after-role-change");
+
+    page.once("dialog", (dialog) => void dialog.accept());
+    await colleagueRow.getByRole("button", { name: `Remove ${colleague.name}` }).click();
+    await page.getByRole("cell", { name: colleague.email }).waitFor({ state: "detached" });
+    expect(await page.getByRole("cell", { name: owner.email }).count()).toBe(1);
+    await page.context().close();
+  });
+
   it("raised no console or page errors along the way", () => {
     expect(problems).toEqual([]);
   });
