@@ -1,6 +1,8 @@
 import type { NextConfig } from "next";
 
 const nextConfig: NextConfig = {
+  // `npm test` builds into its own folder so that it never rebuilds the one a running `npm start` serves.
+  distDir: process.env.NEXT_DIST_DIR ?? ".next",
   reactStrictMode: true,
   poweredByHeader: false,
   // Server-only packages with native or Node-specific code stay out of the bundle.

@@ -8,8 +8,10 @@ cd "$(dirname "$0")/.."
 
 export NEXT_TELEMETRY_DISABLED=1
 PG_PORT=${TEST_PG_PORT:-54339}
-PG_DATA="$PWD/.data/postgres-test"
-RESULTS="$PWD/test-results"
+PG_DATA=${TEST_PG_DATA:-$PWD/.data/postgres-test}
+# A build of its own, so a running `npm start` keeps serving its .next folder.
+export NEXT_DIST_DIR=${NEXT_DIST_DIR:-.next-test}
+RESULTS=${TEST_RESULTS_DIR:-$PWD/test-results}
 
 ensure_node_modules
 ensure_local_secret
@@ -49,10 +51,15 @@ node_modules/.bin/tsx scripts/migrate.ts
 
 mkdir -p "$RESULTS"
 rm -f "$RESULTS/vitest.json"
-log "building (next build)"
-node "$(next_bin)" build >"$RESULTS/build.log" 2>&1 || { tail -n 40 "$RESULTS/build.log"; die "next build failed (log: $RESULTS/build.log)"; }
+if [ "${SKIP_BUILD:-}" = 1 ] && [ -f "$NEXT_DIST_DIR/BUILD_ID" ]; then
+  log "reusing the build in $NEXT_DIST_DIR (SKIP_BUILD=1)"
+else
+  log "building (next build)"
+  node "$(next_bin)" build >"$RESULTS/build.log" 2>&1 || { tail -n 40 "$RESULTS/build.log"; die "next build failed (log: $RESULTS/build.log)"; }
+fi
 
 status=0
-node_modules/.bin/vitest run --reporter=default --reporter=json --outputFile.json="$RESULTS/vitest.json" || status=$?
+# Arguments narrow the run, e.g. `npm test -- tests/integration/datasets` (set SKIP_BUILD=1 to reuse the build).
+node_modules/.bin/vitest run "$@" --reporter=default --reporter=json --outputFile.json="$RESULTS/vitest.json" || status=$?
 node_modules/.bin/tsx scripts/summarise-test-results.ts "$RESULTS/vitest.json" || status=1
 exit "$status"

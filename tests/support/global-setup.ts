@@ -47,7 +47,8 @@ async function waitForHealth(baseUrl: string, timeoutMs: number): Promise<void> 
 
 async function startStack(): Promise<Stack> {
   if (!process.env.DATABASE_URL) throw new Error("DATABASE_URL is not set; run the suites through `npm test`.");
-  if (!existsSync(".next/BUILD_ID")) throw new Error("No production build in .next; run `npm test` (it builds first).");
+  const distDir = process.env.NEXT_DIST_DIR ?? ".next";
+  if (!existsSync(`${distDir}/BUILD_ID`)) throw new Error(`No production build in ${distDir}; run \`npm test\` (it builds first).`);
   const [appPort, smtpPort, sinkHttpPort] = [await freePort(), await freePort(), await freePort()];
   const baseUrl = `http://127.0.0.1:${appPort}`;
   const mailSinkUrl = `http://127.0.0.1:${sinkHttpPort}`;
