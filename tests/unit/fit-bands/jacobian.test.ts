@@ -4,7 +4,7 @@
 // §8.1); with h = 1e-5 the agreement is far better than the 1e-5 asked for.
 import { describe, expect, it } from "vitest";
 import { createRandom, validateBandFit } from "@/lib/fit";
-import { TEMPLATE_IDS, type Vec3, buildTemplate, reciprocalLattice } from "@/lib/tb";
+import { TEMPLATE_IDS, type TemplateId, type Vec3, buildTemplate, reciprocalLattice } from "@/lib/tb";
 
 const RELATIVE_TOLERANCE = 1e-5;
 
@@ -17,7 +17,9 @@ function genericKPoints(lattice: Vec3[], count: number, seed: number): Vec3[] {
   });
 }
 
-const cases = TEMPLATE_IDS.flatMap((id) => (id === "honeycomb-pz" ? [{ id, overlap: false }, { id, overlap: true }] : [{ id, overlap: false }]));
+const cases: { id: TemplateId; overlap: boolean }[] = TEMPLATE_IDS.flatMap((id) =>
+  id === "honeycomb-pz" ? [{ id, overlap: false }, { id, overlap: true }] : [{ id, overlap: false }],
+);
 
 describe("analytic Jacobian matches central finite differences to 1e-5 relative", () => {
   it.each(cases)("$id (overlap: $overlap)", ({ id, overlap }) => {
