@@ -17,7 +17,8 @@ function genericKPoints(lattice: Vec3[], count: number, seed: number): Vec3[] {
   });
 }
 
-const cases: { id: TemplateId; overlap: boolean }[] = TEMPLATE_IDS.flatMap((id) =>
+type Case = { id: TemplateId; overlap: boolean };
+const cases = TEMPLATE_IDS.flatMap((id): Case[] =>
   id === "honeycomb-pz" ? [{ id, overlap: false }, { id, overlap: true }] : [{ id, overlap: false }],
 );
 
