@@ -2,8 +2,8 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { formatDateTime, linkSegments } from "@/components/format";
 import { Brand } from "@/components/shell/brand";
-import { EmptyState, PageHeader } from "@/components/ui";
-import { isMailSinkEnabled, listSinkMessages } from "@/lib/server/mail-sink";
+import { EmptyState, Notice, PageHeader } from "@/components/ui";
+import { isMailSinkEnabled, listSinkMessages, type SinkMessage } from "@/lib/server/mail-sink";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Development mail", robots: { index: false } };
@@ -14,7 +14,15 @@ export const metadata: Metadata = { title: "Development mail", robots: { index: 
  */
 export default async function DevMailPage() {
   if (!isMailSinkEnabled()) notFound();
-  const messages = await listSinkMessages();
+  let messages: SinkMessage[] = [];
+  let sinkDown = false;
+  try {
+    messages = await listSinkMessages();
+  } catch (error) {
+    // A stopped sink is a development hiccup, not a broken page: say so and how to fix it.
+    console.error(error);
+    sinkDown = true;
+  }
   return (
     <div className="mx-auto max-w-page px-4 py-8">
       <div className="mb-6">
@@ -25,7 +33,11 @@ export default async function DevMailPage() {
         title="Caught e-mail"
         description="Every message the app sent to the local mail sink, newest first. Nothing here reaches a real inbox."
       />
-      {messages.length === 0 ? (
+      {sinkDown ? (
+        <Notice tone="warning" title="The mail sink is not answering">
+          Start the app with <code className="font-mono">npm start</code>, which runs the sink beside it, then reload this page.
+        </Notice>
+      ) : messages.length === 0 ? (
         <EmptyState
           title="No e-mail yet"
           description="Invite a member or request a password reset; the message shows up here. Reload the page to check again."
