@@ -57,7 +57,12 @@ export const fitRevision = pgTable(
     failureReason: text("failure_reason"),
     cancelRequested: timestamp("cancel_requested", { withTimezone: true }),
     jobId: text("job_id"),
+    /** runs started so far; the result write is guarded by it, so a superseded attempt cannot commit */
     attempts: integer("attempts").notNull().default(0),
+    /** name of the worker process that holds the current attempt (host:pid or WORKER_NAME) */
+    runner: text("runner"),
+    /** checks at launch that did not refuse the fit (e.g. a k-frame mismatch), `{ kind, message }[]` */
+    launchWarnings: jsonb("launch_warnings").$type<{ kind: string; message: string }[]>().notNull().default([]),
     launchedBy: text("launched_by").references(() => user.id, { onDelete: "set null" }),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     startedAt: timestamp("started_at", { withTimezone: true }),
