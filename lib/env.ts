@@ -20,6 +20,10 @@ const envSchema = z.object({
   AUTH_RATE_LIMIT_MAX: z.coerce.number().int().positive().default(10),
   /** Length of that window, seconds. */
   AUTH_RATE_LIMIT_WINDOW_SECONDS: z.coerce.number().int().positive().default(60),
+  /** Largest dataset file accepted, bytes (25 MiB). */
+  DATASET_MAX_BYTES: z.coerce.number().int().positive().default(26_214_400),
+  /** Largest number of points (energies) in one dataset. */
+  DATASET_MAX_POINTS: z.coerce.number().int().positive().default(500_000),
 });
 
 export type Env = z.infer<typeof envSchema>;

@@ -1,0 +1,171 @@
+import "server-only";
+import { createHash, randomUUID } from "node:crypto";
+import { NextResponse } from "next/server";
+import { findDatasetBySha256, insertDatasetWithPoints } from "@/db/queries/datasets";
+import {
+  describeByteLimit,
+  parseDatasetMapping,
+  parseDispersionFile,
+  type DataPoint,
+  type FileIssue,
+} from "@/lib/datasets";
+import { env } from "@/lib/env";
+import type { WorkspaceAccess } from "@/lib/server/workspace-access";
+import { readUploadParts } from "./read-upload";
+
+/** An issue as the 422 body lists it: row and column 1-based (null when not tied to one), with the header name. */
+export type UploadIssue = FileIssue;
+
+/** Body of a refused upload (422). `fieldErrors` names mapping fields; `issues` rows and columns of the file. */
+export type UploadRefusal = {
+  error: {
+    code: "validation_failed";
+    message: string;
+    issues: UploadIssue[];
+    issueCount: number;
+    fieldErrors?: Record<string, string[]>;
+  };
+};
+
+/** Body of a duplicate upload (409): the dataset that already holds these bytes. */
+export type UploadConflict = { error: { code: "conflict"; message: string; datasetId: string; href: string } };
+
+/** Body of an accepted upload (201). */
+export type UploadAccepted = { id: string; pointCount: number; bandCount: number; warnings: string[] };
+
+const refuse = (message: string, issues: UploadIssue[], extra: { issueCount?: number; fieldErrors?: Record<string, string[]> } = {}) =>
+  NextResponse.json<UploadRefusal>(
+    {
+      error: {
+        code: "validation_failed",
+        message,
+        issues,
+        issueCount: extra.issueCount ?? issues.length,
+        ...(extra.fieldErrors ? { fieldErrors: extra.fieldErrors } : {}),
+      },
+    },
+    { status: 422 },
+  );
+
+const conflict = (slug: string, existing: { id: string; name: string }) =>
+  NextResponse.json<UploadConflict>(
+    {
+      error: {
+        code: "conflict",
+        message: `This file is already in the workspace as “${existing.name}”.`,
+        datasetId: existing.id,
+        href: `/w/${slug}/datasets/${existing.id}`,
+      },
+    },
+    { status: 409 },
+  );
+
+function parseMappingJson(text: string): unknown {
+  try {
+    return JSON.parse(text);
+  } catch {
+    return undefined;
+  }
+}
+
+const toStoredPoint = (p: DataPoint, index: number) => ({
+  index,
+  row: p.row,
+  kIndex: p.kIndex,
+  kx: p.k[0],
+  ky: p.k[1],
+  kz: p.k[2],
+  pathDistance: p.pathDistance,
+  band: p.band,
+  energy: p.energy,
+  sigma: p.sigma ?? null,
+  weight: p.weight ?? null,
+  label: p.label ?? null,
+});
+
+const isUniqueViolation = (error: unknown): boolean =>
+  typeof error === "object" && error !== null && "cause" in error
+    ? isUniqueViolation((error as { cause: unknown }).cause)
+    : typeof error === "object" && error !== null && (error as { code?: unknown }).code === "23505";
+
+/**
+ * The whole upload: reads the multipart body within the size limit, validates the mapping, hashes the
+ * bytes, refuses a file already in the workspace, re-parses the stored bytes with the mapping (streaming)
+ * and stores dataset and points in one transaction. Nothing is stored unless every row is good.
+ * Limits: `DATASET_MAX_BYTES` and `DATASET_MAX_POINTS` (lib/env.ts).
+ * @returns 201 {@link UploadAccepted}, 409 {@link UploadConflict} or 422 {@link UploadRefusal}
+ */
+export async function uploadDataset(request: Request, access: WorkspaceAccess): Promise<Response> {
+  const maxBytes = env.DATASET_MAX_BYTES;
+  const parts = await readUploadParts(request, maxBytes);
+  const sizeIssue = (): UploadIssue => ({
+    row: null,
+    column: null,
+    columnName: null,
+    message: `the file is larger than the limit of ${describeByteLimit(maxBytes)}`,
+  });
+  if ("tooLarge" in parts) return refuse("The file is too large.", [sizeIssue()]);
+
+  const mappingJson = parseMappingJson(parts.mappingText);
+  if (mappingJson === undefined)
+    return refuse("The mapping is not valid JSON.", [], { fieldErrors: { mapping: ["the mapping is not valid JSON"] } });
+  const mapping = parseDatasetMapping(mappingJson);
+  if (!mapping.ok) {
+    const first = Object.entries(mapping.fieldErrors)[0];
+    return refuse(first ? `${first[0]}: ${first[1][0]}` : "The mapping is invalid.", [], { fieldErrors: mapping.fieldErrors });
+  }
+  if (parts.file.size > maxBytes) return refuse("The file is too large.", [sizeIssue()]);
+
+  const bytes = new Uint8Array(await parts.file.arrayBuffer());
+  const sha256 = createHash("sha256").update(bytes).digest("hex");
+  const existing = await findDatasetBySha256({ workspaceId: access.workspace.id, sha256 });
+  if (existing) return conflict(access.workspace.slug, existing);
+
+  // The stored bytes, not anything the browser parsed, decide: re-read them as a stream.
+  const parsed = await parseDispersionFile(new Blob([bytes]).stream(), mapping.mapping, {
+    maxBytes,
+    maxPoints: env.DATASET_MAX_POINTS,
+  });
+  if (!parsed.ok) {
+    const shown = parsed.issues.length < parsed.issueCount ? ` (the first ${parsed.issues.length} are listed)` : "";
+    return refuse(`The file has ${parsed.issueCount} problem${parsed.issueCount === 1 ? "" : "s"}${shown}; nothing was stored.`, parsed.issues, {
+      issueCount: parsed.issueCount,
+    });
+  }
+
+  const id = randomUUID();
+  const m = mapping.mapping;
+  try {
+    await insertDatasetWithPoints(
+      {
+        id,
+        workspaceId: access.workspace.id,
+        name: m.name,
+        description: m.description ?? "",
+        source: m.source,
+        energyReference: m.energyReference ?? null,
+        mapping: m,
+        summary: parsed.summary,
+        fileName: parts.file.name || "upload.csv",
+        fileType: parts.file.type || "text/csv",
+        fileSize: bytes.byteLength,
+        fileSha256: sha256,
+        fileBytes: Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength),
+        pointCount: parsed.summary.pointCount,
+        bandCount: parsed.summary.bandCount,
+        uploadedBy: access.user.id,
+      },
+      parsed.points.map(toStoredPoint),
+    );
+  } catch (error) {
+    // Two uploads of the same file at once: the unique index lets one through.
+    if (!isUniqueViolation(error)) throw error;
+    const winner = await findDatasetBySha256({ workspaceId: access.workspace.id, sha256 });
+    if (winner) return conflict(access.workspace.slug, winner);
+    throw error;
+  }
+  return NextResponse.json<UploadAccepted>(
+    { id, pointCount: parsed.summary.pointCount, bandCount: parsed.summary.bandCount, warnings: parsed.warnings },
+    { status: 201 },
+  );
+}
