@@ -14,14 +14,21 @@ export interface EigenOutput {
 export interface HermitianEigenSolver {
   readonly size: number;
   /**
-   * Diagonalises the Hermitian matrix given by `re` and `im` (row-major, both triangles filled; the
-   * input is not modified). Writes ascending eigenvalues into `out.values` and, if `withVectors`,
+   * Diagonalises the Hermitian matrix given by `re` and `im` (row-major; only the lower triangle and the
+   * diagonal are read, so the upper triangle may hold anything; the input is not modified). Writes ascending eigenvalues into `out.values` and, if `withVectors`,
    * orthonormal eigenvectors into `out.vectorsRe` / `out.vectorsIm`.
    */
   solve(re: Float64Array, im: Float64Array, out: EigenOutput, withVectors: boolean): void;
 }
 
 const MAX_QL_ITERATIONS = 60;
+
+// √(a² + b²) without Math.hypot's cost (variadic, it was the QL loop's largest single expense); falls
+// back to Math.hypot only where a² + b² would overflow or lose precision to underflow.
+function hypot2(a: number, b: number): number {
+  const sum = a * a + b * b;
+  return sum < 1e300 && sum > 1e-300 ? Math.sqrt(sum) : Math.hypot(a, b);
+}
 
 /** Allocates output arrays matching a solver of the given size. */
 export function createEigenOutput(size: number): EigenOutput {
@@ -62,7 +69,7 @@ export function createHermitianEigenSolver(size: number): HermitianEigenSolver {
       for (let j = below + 1; j < n; j++) tailNorm2 += aRe[j * n + k] ** 2 + aIm[j * n + k] ** 2;
       const x0Re = aRe[below * n + k];
       const x0Im = aIm[below * n + k];
-      const x0Abs = Math.hypot(x0Re, x0Im);
+      const x0Abs = hypot2(x0Re, x0Im);
       if (tailNorm2 === 0) {
         tau[k] = 0; // already reduced: the sub-diagonal x0 stays as it is
         continue;
@@ -82,22 +89,35 @@ export function createHermitianEigenSolver(size: number): HermitianEigenSolver {
       }
       const t = 1 / (xNorm * (xNorm + x0Abs));
       tau[k] = t;
-      // p = τ B v over the trailing block B = A[below.., below..].
-      let c = 0;
+      // p = τ B v over the trailing block B = A[below.., below..], read from its lower triangle only
+      // (B is Hermitian: B_ji = conj(B_ij)), which halves the work as in LAPACK's zhetrd.
       for (let i = below; i < n; i++) {
-        let sr = 0;
-        let si = 0;
+        pRe[i] = 0;
+        pIm[i] = 0;
+      }
+      for (let i = below; i < n; i++) {
         const ri = i * n;
-        for (let j = below; j < n; j++) {
+        const xir = vRe[row + i];
+        const xii = vIm[row + i];
+        let sr = aRe[ri + i] * xir;
+        let si = aRe[ri + i] * xii;
+        for (let j = below; j < i; j++) {
           const br = aRe[ri + j];
           const bi = aIm[ri + j];
           const xr = vRe[row + j];
           const xi = vIm[row + j];
-          sr += br * xr - bi * xi;
+          sr += br * xr - bi * xi; // B_ij v_j
           si += br * xi + bi * xr;
+          pRe[j] += br * xir + bi * xii; // conj(B_ij) v_i
+          pIm[j] += br * xii - bi * xir;
         }
-        pRe[i] = t * sr;
-        pIm[i] = t * si;
+        pRe[i] += sr;
+        pIm[i] += si;
+      }
+      let c = 0;
+      for (let i = below; i < n; i++) {
+        pRe[i] *= t;
+        pIm[i] *= t;
         c += vRe[row + i] * pRe[i] + vIm[row + i] * pIm[i]; // Re(conj(v_i) p_i); v†p is real
       }
       const half = 0.5 * t * c;
@@ -105,14 +125,14 @@ export function createHermitianEigenSolver(size: number): HermitianEigenSolver {
         pRe[i] -= half * vRe[row + i]; // p becomes w = p − (τ v†p / 2) v
         pIm[i] -= half * vIm[row + i];
       }
-      // B ← B − v w† − w v†
+      // B ← B − v w† − w v†, lower triangle only
       for (let i = below; i < n; i++) {
         const vir = vRe[row + i];
         const vii = vIm[row + i];
         const wir = pRe[i];
         const wii = pIm[i];
         const ri = i * n;
-        for (let j = below; j < n; j++) {
+        for (let j = below; j <= i; j++) {
           const vjr = vRe[row + j];
           const vji = vIm[row + j];
           const wjr = pRe[j];
@@ -131,7 +151,7 @@ export function createHermitianEigenSolver(size: number): HermitianEigenSolver {
     for (let j = 0; j < n - 1; j++) {
       const er = aRe[(j + 1) * n + j];
       const ei = aIm[(j + 1) * n + j];
-      const abs = Math.hypot(er, ei);
+      const abs = hypot2(er, ei);
       off[j] = abs;
       const ur = abs === 0 ? 1 : er / abs;
       const ui = abs === 0 ? 0 : ei / abs;
@@ -157,7 +177,7 @@ export function createHermitianEigenSolver(size: number): HermitianEigenSolver {
         if (m !== l) {
           if (iterations++ === MAX_QL_ITERATIONS) throw new Error("Hermitian eigen-solver did not converge");
           let g = (diag[l + 1] - diag[l]) / (2 * off[l]);
-          let r = Math.hypot(g, 1);
+          let r = hypot2(g, 1);
           g = diag[m] - diag[l] + off[l] / (g + (g >= 0 ? Math.abs(r) : -Math.abs(r)));
           let s = 1;
           let c = 1;
@@ -166,7 +186,7 @@ export function createHermitianEigenSolver(size: number): HermitianEigenSolver {
           for (i = m - 1; i >= l; i--) {
             let f = s * off[i];
             const b = c * off[i];
-            r = Math.hypot(f, g);
+            r = hypot2(f, g);
             off[i + 1] = r;
             if (r === 0) {
               diag[i + 1] -= p;

@@ -44,8 +44,10 @@ export function assembleBandFitResult(
     }))
     .filter((p, j) => j < modelCount || p.free || p.value !== (j === modelCount ? 0 : 1));
 
-  const theta = Float64Array.from(fit.parameters, (p) => p.value);
-  const { modelBands } = residualModel.predict(theta);
+  // An offset mapping fixes every point's model band; only the nearest mapping needs the bands at the solution.
+  const modelBands = selection.kept.every((point) => point.modelBand >= 0)
+    ? Int32Array.from(selection.kept, (point) => point.modelBand)
+    : residualModel.predict(Float64Array.from(fit.parameters, (p) => p.value)).modelBands;
   const residuals = selection.kept.map((point, i) => {
     const modelEnergy = fit.modelValues[i];
     return {

@@ -71,8 +71,9 @@ export function libraryStep(input: LibraryStepInput): LibraryStepResult {
       errorTolerance: 0,
       jacobianFunction: (u) => {
         const jacobian = evaluator.jacobian(toTheta(u));
+        // The library copies each row before asking for the next, so one row buffer serves all N rows.
+        const row = new Array<number>(p);
         return (i) => {
-          const row = new Array<number>(p);
           for (let k = 0; k < p; k++) row[k] = jacobian[i * p + k] * scale[k];
           return row;
         };

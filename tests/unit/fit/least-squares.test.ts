@@ -287,12 +287,31 @@ describe("progress, limits and cancellation", () => {
     expectAllFinite(result);
   });
 
-  it("the async fit yields to the event loop, so a timer can cancel it", async () => {
+  it("the async fit yields to the event loop, so a callback queued before it can cancel it", async () => {
     const controller = new AbortController();
-    setTimeout(() => controller.abort(), 0);
+    // Queued first, so it runs at the fit's first yield (after iteration 1), before the fit resumes.
+    setImmediate(() => controller.abort());
     const result = await fitLeastSquaresAsync(nistProblem(thurber, 0), { yieldIntervalMs: 0 }, { signal: controller.signal });
     expect(result.cancelled).toBe(true);
     expect(result.iterations).toBe(1);
+  });
+
+  it("the async fit lets a due timer run between iterations, so a timer can cancel it", async () => {
+    const controller = new AbortController();
+    setTimeout(() => controller.abort(), 0);
+    const busyUntil = (ms: number) => {
+      const end = performance.now() + ms;
+      while (performance.now() < end);
+    };
+    // Each iteration takes ≥ 2 ms, so the timer (due after ≥ 1 ms) is due at the first yield; Node runs
+    // due timers at the latest on the loop turn after that yield's setImmediate: at most two iterations.
+    const result = await fitLeastSquaresAsync(
+      nistProblem(thurber, 0),
+      { yieldIntervalMs: 0 },
+      { signal: controller.signal, onProgress: () => busyUntil(2) },
+    );
+    expect(result.cancelled).toBe(true);
+    expect(result.iterations).toBeLessThanOrEqual(2);
   });
 
   it("the async fit gives the same answer as the synchronous one", async () => {
