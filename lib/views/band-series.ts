@@ -1,0 +1,116 @@
+import { type ModelDocument, type Vec3, compileModel, computeBands } from "@/lib/tb";
+
+/** A data point on a band chart: path distance (1/Å) and energy (eV). */
+export interface ChartPoint {
+  x: number;
+  y: number;
+}
+
+/** Data points of one data band, sorted along the path. */
+export interface DataBandSeries {
+  band: number;
+  points: ChartPoint[];
+}
+
+/** The fields of a dataset point a band chart needs. */
+export interface ChartDataPoint {
+  /** 1/Å */
+  pathDistance: number;
+  band: number;
+  /** eV */
+  energy: number;
+}
+
+/**
+ * Data points grouped by band (ascending), each band sorted by path distance.
+ * @param points - dataset points, any order
+ */
+export function dataSeriesByBand(points: readonly ChartDataPoint[]): DataBandSeries[] {
+  const byBand = new Map<number, ChartPoint[]>();
+  for (const p of points) {
+    const list = byBand.get(p.band) ?? [];
+    list.push({ x: p.pathDistance, y: p.energy });
+    byBand.set(p.band, list);
+  }
+  return [...byBand.entries()]
+    .sort(([a], [b]) => a - b)
+    .map(([band, list]) => ({ band, points: list.sort((a, b) => a.x - b.x) }));
+}
+
+/** A distinct k-point of the data with its place on the path. */
+export interface PathKPoint {
+  /** Cartesian, 1/Å */
+  k: Vec3;
+  /** 1/Å */
+  pathDistance: number;
+}
+
+/** A model band as a line: y is null where the path jumps, so the line breaks there. */
+export interface ModelBandLine {
+  /** 1-based model band */
+  band: number;
+  points: { x: number; y: number | null }[];
+}
+
+/**
+ * The global energy terms of a fit (eV; Z dimensionless): E_pred = E_ref + (E_model − E_ref)/Z + δ,
+ * the band fit's own convention (lib/fit/bands/schema.ts).
+ */
+export interface EnergyTransform {
+  offset: number;
+  renormalisation: number;
+  reference: number;
+}
+
+export const IDENTITY_TRANSFORM: EnergyTransform = { offset: 0, renormalisation: 1, reference: 0 };
+
+/**
+ * Model bands along the data's own k-points, for drawing over the data: the k-points are sorted by path
+ * distance, the bands computed with lib/tb, and the fit's offset and renormalisation applied.
+ * Two k-points at the same path distance mark a jump in the path: the lines break there.
+ * @param model - the model document (its parameter values are used)
+ * @param kPoints - distinct k-points of the data (Cartesian 1/Å, in the model's frame)
+ * @throws ModelError when the document does not compile
+ */
+export function modelBandLines(model: ModelDocument, kPoints: readonly PathKPoint[], transform: EnergyTransform = IDENTITY_TRANSFORM): ModelBandLine[] {
+  const sorted = [...kPoints].sort((a, b) => a.pathDistance - b.pathDistance);
+  const compiled = compileModel(model);
+  const n = compiled.orbitalCount;
+  const { energies } = computeBands(compiled, undefined, sorted.map((p) => p.k));
+  const { offset, renormalisation, reference } = transform;
+  return Array.from({ length: n }, (_, band) => {
+    const points: { x: number; y: number | null }[] = [];
+    sorted.forEach((p, i) => {
+      if (i > 0 && p.pathDistance === sorted[i - 1].pathDistance) points.push({ x: p.pathDistance, y: null });
+      points.push({ x: p.pathDistance, y: reference + (energies[i * n + band] - reference) / renormalisation + offset });
+    });
+    return { band: band + 1, points };
+  });
+}
+
+/**
+ * Distinct k-points of dataset points, by their k-point index.
+ * @param points - dataset points with `kIndex`, Cartesian `k` (1/Å) and `pathDistance` (1/Å)
+ */
+export function distinctKPoints(points: readonly (PathKPoint & { kIndex: number })[]): PathKPoint[] {
+  const byIndex = new Map<number, PathKPoint>();
+  for (const p of points) if (!byIndex.has(p.kIndex)) byIndex.set(p.kIndex, { k: p.k, pathDistance: p.pathDistance });
+  return [...byIndex.values()];
+}
+
+/**
+ * Energy range (eV) to show: the given zoom window if any, else the data's range with 5 % padding.
+ * @param zoom - the user's energy window, eV
+ */
+export function energyDomain(points: readonly ChartDataPoint[], zoom?: { min: number; max: number }): [number, number] {
+  if (zoom && zoom.min < zoom.max) return [zoom.min, zoom.max];
+  if (points.length === 0) return [-1, 1];
+  let low = Infinity;
+  let high = -Infinity;
+  for (const p of points) {
+    low = Math.min(low, p.energy);
+    high = Math.max(high, p.energy);
+  }
+  const pad = (high - low || 1) * 0.05;
+  return [low - pad, high + pad];
+}

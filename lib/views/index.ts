@@ -1,0 +1,46 @@
+export { type PathTick, displayLabel, pathTicks, tickLabeller } from "./ticks";
+export { UNMAPPED_BAND_COLOUR, dataBandColours, modelBandColours } from "./band-colours";
+export { type BandPair, bandPairs } from "./band-mapping";
+export {
+  type ChartDataPoint,
+  type ChartPoint,
+  type DataBandSeries,
+  type EnergyTransform,
+  type ModelBandLine,
+  type PathKPoint,
+  IDENTITY_TRANSFORM,
+  dataSeriesByBand,
+  distinctKPoints,
+  energyDomain,
+  modelBandLines,
+} from "./band-series";
+export {
+  type BandComparisonRow,
+  type ComparedBand,
+  type ComparedParameter,
+  type ParameterComparisonRow,
+  compareBands,
+  compareParameters,
+} from "./compare";
+export { type CorrelationCell, STRONG_CORRELATION, correlationCells, correlationFill } from "./heatmap";
+export { type TracePoint, convergenceSeries } from "./convergence";
+export {
+  type ResidualQuery,
+  type ResidualSortColumn,
+  pageCount,
+  residualQuerySchema,
+  residualSearchParams,
+  residualSortColumns,
+  sortFromTable,
+} from "./residual-query";
+export { FieldErrors, type NumberReading, readNumber } from "./number-field";
+export {
+  type DraftReading,
+  type LaunchDraft,
+  type LaunchRequest,
+  type ModelSourceDraft,
+  type ParameterDraft,
+  launchRequestSchema,
+  parameterDrafts,
+  readLaunchDraft,
+} from "./launch-draft";

@@ -1,0 +1,64 @@
+import { describe, expect, it } from "vitest";
+import { buildTemplate } from "@/lib/tb";
+import { dataSeriesByBand, distinctKPoints, energyDomain, modelBandLines } from "@/lib/views/band-series";
+
+describe("dataSeriesByBand", () => {
+  it("groups points by band and sorts each along the path", () => {
+    const series = dataSeriesByBand([
+      { band: 2, pathDistance: 1, energy: 3 },
+      { band: 1, pathDistance: 1, energy: -1 },
+      { band: 1, pathDistance: 0, energy: -2 },
+    ]);
+    expect(series).toEqual([
+      { band: 1, points: [{ x: 0, y: -2 }, { x: 1, y: -1 }] },
+      { band: 2, points: [{ x: 1, y: 3 }] },
+    ]);
+  });
+});
+
+describe("modelBandLines", () => {
+  // Single-band chain: E(k) = E_s − 2t cos(ka) with H = −t Σ c†c (Ashcroft & Mermin, Solid State Physics, ch. 10;
+  // the chain-s template's own convention).
+  const chain = buildTemplate("chain-s");
+  const a = chain.lattice[0][0];
+  const onsite = chain.parameters.find((p) => p.name.startsWith("E_"))?.value ?? 0;
+  const hopping = chain.parameters.find((p) => !p.name.startsWith("E_"))!.value;
+
+  it("follows the chain's closed form along the data's k-points, sorted by path distance", () => {
+    const kPoints = [0.5, 0, 1].map((f) => ({ k: [(f * Math.PI) / a, 0, 0] as [number, number, number], pathDistance: (f * Math.PI) / a }));
+    const [line] = modelBandLines(chain, kPoints);
+    expect(line.points.map((p) => p.x)).toEqual([0, (0.5 * Math.PI) / a, Math.PI / a]);
+    const expected = [0, 0.5, 1].map((f) => onsite - 2 * hopping * Math.cos(f * Math.PI));
+    line.points.forEach((p, i) => expect(p.y).toBeCloseTo(expected[i], 9));
+  });
+
+  it("applies the fit's offset and renormalisation, E_ref + (E − E_ref)/Z + δ", () => {
+    const kPoints = [{ k: [0, 0, 0] as [number, number, number], pathDistance: 0 }];
+    const [line] = modelBandLines(chain, kPoints, { offset: 0.1, renormalisation: 2, reference: 0.5 });
+    const gamma = onsite - 2 * hopping;
+    expect(line.points[0].y).toBeCloseTo(0.5 + (gamma - 0.5) / 2 + 0.1, 12); // convention of lib/fit/bands/schema.ts
+  });
+
+  it("breaks the line where two k-points share a path distance (a jump)", () => {
+    const kPoints = [
+      { k: [0, 0, 0] as [number, number, number], pathDistance: 0 },
+      { k: [1, 0, 0] as [number, number, number], pathDistance: 1 },
+      { k: [0.2, 0, 0] as [number, number, number], pathDistance: 1 },
+    ];
+    const [line] = modelBandLines(chain, kPoints);
+    expect(line.points.map((p) => p.y === null)).toEqual([false, false, true, false]);
+  });
+});
+
+describe("distinctKPoints and energyDomain", () => {
+  it("keeps one k-point per k index", () => {
+    const points = [0, 0, 1].map((kIndex, i) => ({ kIndex, k: [kIndex, 0, 0] as [number, number, number], pathDistance: kIndex + i * 0 }));
+    expect(distinctKPoints(points)).toHaveLength(2);
+  });
+
+  it("pads the data range by 5 % unless a zoom window is given", () => {
+    const points = [{ band: 1, pathDistance: 0, energy: -1 }, { band: 1, pathDistance: 1, energy: 1 }];
+    expect(energyDomain(points)).toEqual([-1.1, 1.1]);
+    expect(energyDomain(points, { min: -0.5, max: 0.5 })).toEqual([-0.5, 0.5]);
+  });
+});
