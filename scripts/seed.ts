@@ -2,6 +2,7 @@ import { closeDatabase } from "@/db/client";
 import { getUserByEmail } from "@/db/queries/users";
 import { getMembership, getWorkspaceBySlug } from "@/db/queries/workspaces";
 import { auth } from "@/lib/auth/server";
+import { seedDemoDatasets } from "@/lib/server/datasets/demo-datasets";
 import { demoPassword, demoUsers, demoWorkspace } from "./lib/demo";
 
 // Seeds the demo workspace and one user per role. Safe to run again: existing rows are left alone.
@@ -33,6 +34,11 @@ for (const demo of demoUsers) {
   if (!userId || (await getMembership({ workspaceId: workspace.id, userId }))) continue;
   await auth.api.addMember({ body: { userId, role: demo.role, organizationId: workspace.id } });
 }
+
+// The demo's datasets appear as uploaded by the editor, as they would be in a real lab.
+const uploader = userIds.get((demoUsers.find((demo) => demo.role === "editor") ?? owner).email);
+if (!uploader) throw new Error("The demo uploader was not created");
+await seedDemoDatasets({ workspaceId: workspace.id, uploadedBy: uploader });
 
 await closeDatabase();
 console.log(`[bandwright] demo workspace "${demoWorkspace.name}" ready`);

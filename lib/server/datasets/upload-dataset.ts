@@ -1,17 +1,11 @@
 import "server-only";
-import { createHash, randomUUID } from "node:crypto";
 import { NextResponse } from "next/server";
 import { findDatasetBySha256, insertDatasetWithPoints } from "@/db/queries/datasets";
-import {
-  describeByteLimit,
-  parseDatasetMapping,
-  parseDispersionFile,
-  type DataPoint,
-  type FileIssue,
-} from "@/lib/datasets";
+import { describeByteLimit, parseDatasetMapping, parseDispersionFile, type FileIssue } from "@/lib/datasets";
 import { env } from "@/lib/env";
 import type { WorkspaceAccess } from "@/lib/server/workspace-access";
 import { readUploadParts } from "./read-upload";
+import { datasetRecord, pointRecords, sha256Hex } from "./stored-dataset";
 
 /** An issue as the 422 body lists it: row and column 1-based (null when not tied to one), with the header name. */
 export type UploadIssue = FileIssue;
@@ -68,21 +62,6 @@ function parseMappingJson(text: string): unknown {
   }
 }
 
-const toStoredPoint = (p: DataPoint, index: number) => ({
-  index,
-  row: p.row,
-  kIndex: p.kIndex,
-  kx: p.k[0],
-  ky: p.k[1],
-  kz: p.k[2],
-  pathDistance: p.pathDistance,
-  band: p.band,
-  energy: p.energy,
-  sigma: p.sigma ?? null,
-  weight: p.weight ?? null,
-  label: p.label ?? null,
-});
-
 const isUniqueViolation = (error: unknown): boolean =>
   typeof error === "object" && error !== null && "cause" in error
     ? isUniqueViolation((error as { cause: unknown }).cause)
@@ -117,7 +96,7 @@ export async function uploadDataset(request: Request, access: WorkspaceAccess): 
   if (parts.file.size > maxBytes) return refuse("The file is too large.", [sizeIssue()]);
 
   const bytes = new Uint8Array(await parts.file.arrayBuffer());
-  const sha256 = createHash("sha256").update(bytes).digest("hex");
+  const sha256 = sha256Hex(bytes);
   const existing = await findDatasetBySha256({ workspaceId: access.workspace.id, sha256 });
   if (existing) return conflict(access.workspace.slug, existing);
 
@@ -133,30 +112,15 @@ export async function uploadDataset(request: Request, access: WorkspaceAccess): 
     });
   }
 
-  const id = randomUUID();
-  const m = mapping.mapping;
+  const record = datasetRecord({
+    workspaceId: access.workspace.id,
+    uploadedBy: access.user.id,
+    mapping: mapping.mapping,
+    summary: parsed.summary,
+    file: { name: parts.file.name || "upload.csv", type: parts.file.type || "text/csv", bytes, sha256 },
+  });
   try {
-    await insertDatasetWithPoints(
-      {
-        id,
-        workspaceId: access.workspace.id,
-        name: m.name,
-        description: m.description ?? "",
-        source: m.source,
-        energyReference: m.energyReference ?? null,
-        mapping: m,
-        summary: parsed.summary,
-        fileName: parts.file.name || "upload.csv",
-        fileType: parts.file.type || "text/csv",
-        fileSize: bytes.byteLength,
-        fileSha256: sha256,
-        fileBytes: Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength),
-        pointCount: parsed.summary.pointCount,
-        bandCount: parsed.summary.bandCount,
-        uploadedBy: access.user.id,
-      },
-      parsed.points.map(toStoredPoint),
-    );
+    await insertDatasetWithPoints(record, pointRecords(parsed.points));
   } catch (error) {
     // Two uploads of the same file at once: the unique index lets one through.
     if (!isUniqueViolation(error)) throw error;
@@ -165,7 +129,7 @@ export async function uploadDataset(request: Request, access: WorkspaceAccess): 
     throw error;
   }
   return NextResponse.json<UploadAccepted>(
-    { id, pointCount: parsed.summary.pointCount, bandCount: parsed.summary.bandCount, warnings: parsed.warnings },
+    { id: record.id, pointCount: parsed.summary.pointCount, bandCount: parsed.summary.bandCount, warnings: parsed.warnings },
     { status: 201 },
   );
 }
