@@ -1,1 +1,1 @@
-export { invitationMessage, passwordResetMessage, type MailMessage } from "./messages";
+export { fitFinishedMessage, invitationMessage, passwordResetMessage, type MailMessage } from "./messages";

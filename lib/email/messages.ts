@@ -46,3 +46,27 @@ export function passwordResetMessage(input: { to: string; name: string; resetUrl
     "<p>The link works once and expires in one hour. If you did not ask for it, ignore this e-mail.</p>";
   return { to, subject, text, html };
 }
+
+/** Tells the launcher that a fit revision ended; `revisionUrl` is `{APP_URL}/w/{slug}/fits/{fitId}/revisions/{n}`. */
+export function fitFinishedMessage(input: {
+  to: string;
+  fitName: string;
+  revision: number;
+  status: "succeeded" | "cancelled" | "failed";
+  /** unweighted RMS of the residuals, eV (absent when the fit failed) */
+  rms?: number;
+  revisionUrl: string;
+}): MailMessage {
+  const { to, fitName, revision, status, rms, revisionUrl } = input;
+  const outcome = { succeeded: "finished", cancelled: "was cancelled", failed: "failed" }[status];
+  const subject = `Fit "${fitName}" revision ${revision} ${outcome}`;
+  const rmsLine = rms === undefined ? "" : `RMS of the residuals: ${(rms * 1000).toFixed(1)} meV.`;
+  const text = [`Revision ${revision} of the fit "${fitName}" ${outcome}.`, rmsLine, "", `See the result: ${revisionUrl}`]
+    .filter((line, i) => i !== 1 || line !== "")
+    .join("\n");
+  const html =
+    `<p>Revision ${revision} of the fit <strong>${escapeHtml(fitName)}</strong> ${outcome}.</p>` +
+    (rmsLine ? `<p>${escapeHtml(rmsLine)}</p>` : "") +
+    `<p><a href="${escapeHtml(revisionUrl)}">See the result</a></p>`;
+  return { to, subject, text, html };
+}

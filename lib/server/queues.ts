@@ -13,7 +13,42 @@ export const healthQueue = {
 /** Output of a completed health job. */
 export type HealthJobOutput = { worker: string; answeredAt: string };
 
+/**
+ * Where fit jobs go after their last retry (a worker died on every attempt, or the handler kept throwing):
+ * the worker's dead-letter handler ends the revision `failed` with a readable reason.
+ */
+export const fitDeadLetterQueue = {
+  name: "fit-revision-dead",
+  options: { name: "fit-revision-dead", retryLimit: 3, retryDelay: 5, expireInSeconds: 60 },
+} as const satisfies { name: string; options: PgBoss.Queue };
+
+/**
+ * One job per revision. Retries cover a worker that died mid-fit: its job expires (pg-boss 10 has no
+ * heartbeat), the next maintenance pass returns it, and the retried attempt restarts the revision. Each
+ * job's own expiry is derived from the fit's time limit when it is sent ({@link fitJobExpirySeconds}).
+ */
+export const fitQueue = {
+  name: "fit-revision",
+  options: { name: "fit-revision", retryLimit: 2, retryDelay: 1, retentionSeconds: 7 * 86_400, deadLetter: fitDeadLetterQueue.name },
+} as const satisfies { name: string; options: PgBoss.Queue };
+
+/** Data of a fit job. */
+export type FitJobData = { revisionId: string };
+
+/**
+ * A fit job's expiry, seconds: the fit's own wall-clock limit (the engine stops there), plus a quarter for
+ * loading and writing, plus a fixed margin; capped at pg-boss's 24 hours.
+ * @param timeLimitMs - the fit's `timeLimitMs`, milliseconds
+ * @param marginSeconds - fixed margin, seconds
+ */
+export function fitJobExpirySeconds(timeLimitMs: number, marginSeconds: number): number {
+  return Math.min(86_400, Math.ceil((timeLimitMs / 1000) * 1.25 + marginSeconds));
+}
+
 /** Every queue the app uses; createQueue is idempotent, so both app and worker call this on start. */
 export async function createQueues(boss: PgBoss): Promise<void> {
   await boss.createQueue(healthQueue.name, healthQueue.options);
+  // The dead-letter queue first: the fit queue's row refers to it.
+  await boss.createQueue(fitDeadLetterQueue.name, fitDeadLetterQueue.options);
+  await boss.createQueue(fitQueue.name, fitQueue.options);
 }

@@ -1,0 +1,267 @@
+import { and, asc, desc, eq, inArray, max, sql } from "drizzle-orm";
+import { randomUUID } from "node:crypto";
+import { db } from "@/db/client";
+import { type NewFitResidual, type RevisionStatus, fit, fitResidual, fitRevision, organization, user } from "@/db/schema";
+
+// Fits and their revisions: creation, reads for the routes, and the guarded writes of the worker.
+// Every final write carries `status = 'running' AND attempts = <the writer's attempt>`, so a superseded or
+// cancelled attempt can never overwrite a final state.
+
+type LaunchWarning = { kind: string; message: string };
+
+/** Creates a fit and its revision 1 (status queued) in one transaction. */
+export async function createFitWithFirstRevision(params: {
+  workspaceId: string;
+  datasetId: string;
+  name: string;
+  notes: string;
+  launchedBy: string;
+  inputs: unknown;
+  launchWarnings: LaunchWarning[];
+}): Promise<{ fitId: string; revisionId: string; number: number }> {
+  const fitId = randomUUID();
+  const revisionId = randomUUID();
+  await db.transaction(async (tx) => {
+    await tx.insert(fit).values({
+      id: fitId,
+      workspaceId: params.workspaceId,
+      datasetId: params.datasetId,
+      name: params.name,
+      notes: params.notes,
+      createdBy: params.launchedBy,
+    });
+    await tx.insert(fitRevision).values({
+      id: revisionId,
+      fitId,
+      number: 1,
+      inputs: params.inputs,
+      launchedBy: params.launchedBy,
+      launchWarnings: params.launchWarnings,
+    });
+  });
+  return { fitId, revisionId, number: 1 };
+}
+
+/** Adds the next revision of a fit (number = highest + 1, the fit row locked meanwhile). */
+export async function createNextRevision(params: {
+  fitId: string;
+  parentNumber: number;
+  launchedBy: string;
+  inputs: unknown;
+  launchWarnings: LaunchWarning[];
+}): Promise<{ revisionId: string; number: number }> {
+  const revisionId = randomUUID();
+  const number = await db.transaction(async (tx) => {
+    await tx.select({ id: fit.id }).from(fit).where(eq(fit.id, params.fitId)).for("update");
+    const [{ highest }] = await tx.select({ highest: max(fitRevision.number) }).from(fitRevision).where(eq(fitRevision.fitId, params.fitId));
+    const next = (highest ?? 0) + 1;
+    await tx.insert(fitRevision).values({
+      id: revisionId,
+      fitId: params.fitId,
+      number: next,
+      parentNumber: params.parentNumber,
+      inputs: params.inputs,
+      launchedBy: params.launchedBy,
+      launchWarnings: params.launchWarnings,
+    });
+    return next;
+  });
+  return { revisionId, number };
+}
+
+/** Records the queue job of a revision. */
+export async function setRevisionJob(params: { revisionId: string; jobId: string }): Promise<void> {
+  await db.update(fitRevision).set({ jobId: params.jobId }).where(eq(fitRevision.id, params.revisionId));
+}
+
+/** Marks a revision failed before any worker saw it (e.g. the queue refused the job). */
+export async function failQueuedRevision(params: { revisionId: string; reason: string }): Promise<void> {
+  await db
+    .update(fitRevision)
+    .set({ status: "failed", failureReason: params.reason, finishedAt: new Date() })
+    .where(and(eq(fitRevision.id, params.revisionId), eq(fitRevision.status, "queued")));
+}
+
+const revisionSummaryColumns = {
+  id: fitRevision.id,
+  number: fitRevision.number,
+  parentNumber: fitRevision.parentNumber,
+  status: fitRevision.status,
+  attempts: fitRevision.attempts,
+  launchedBy: user.name,
+  createdAt: fitRevision.createdAt,
+  startedAt: fitRevision.startedAt,
+  finishedAt: fitRevision.finishedAt,
+  rms: sql<number | null>`(${fitRevision.result} ->> 'rms')::double precision`,
+};
+
+/** The workspace's fits, newest first, each with its latest revision's number and status. */
+export async function listFits(workspaceId: string) {
+  const fits = await db
+    .select({ id: fit.id, name: fit.name, notes: fit.notes, datasetId: fit.datasetId, createdAt: fit.createdAt })
+    .from(fit)
+    .where(eq(fit.workspaceId, workspaceId))
+    .orderBy(desc(fit.createdAt));
+  if (fits.length === 0) return [];
+  const latest = await db
+    .selectDistinctOn([fitRevision.fitId], { fitId: fitRevision.fitId, number: fitRevision.number, status: fitRevision.status })
+    .from(fitRevision)
+    .where(inArray(fitRevision.fitId, fits.map((f) => f.id)))
+    .orderBy(fitRevision.fitId, desc(fitRevision.number));
+  const byFit = new Map(latest.map((r) => [r.fitId, r]));
+  return fits.map((f) => ({ ...f, latestRevision: byFit.get(f.id)?.number ?? null, latestStatus: byFit.get(f.id)?.status ?? null }));
+}
+
+/** One fit of the workspace with its revisions (summaries, oldest first), or null. */
+export async function getFit(params: { workspaceId: string; fitId: string }) {
+  const rows = await db
+    .select()
+    .from(fit)
+    .where(and(eq(fit.workspaceId, params.workspaceId), eq(fit.id, params.fitId)))
+    .limit(1);
+  const found = rows[0];
+  if (!found) return null;
+  const revisions = await db
+    .select(revisionSummaryColumns)
+    .from(fitRevision)
+    .leftJoin(user, eq(user.id, fitRevision.launchedBy))
+    .where(eq(fitRevision.fitId, found.id))
+    .orderBy(asc(fitRevision.number));
+  return { ...found, revisions };
+}
+
+/** One revision of a workspace's fit (all columns, launcher's name and e-mail), or null. */
+export async function getRevision(params: { workspaceId: string; fitId: string; number: number }) {
+  const rows = await db
+    .select({ revision: fitRevision, fit, launcherName: user.name, launcherEmail: user.email })
+    .from(fitRevision)
+    .innerJoin(fit, eq(fit.id, fitRevision.fitId))
+    .leftJoin(user, eq(user.id, fitRevision.launchedBy))
+    .where(and(eq(fit.workspaceId, params.workspaceId), eq(fit.id, params.fitId), eq(fitRevision.number, params.number)))
+    .limit(1);
+  return rows[0] ?? null;
+}
+export type RevisionDetails = NonNullable<Awaited<ReturnType<typeof getRevision>>>;
+
+/**
+ * Cancels a revision: a queued one ends `cancelled` at once (no worker will start it); a running one gets
+ * its cancel request stamped, which the worker polls. Returns the status after the request.
+ */
+export async function requestCancel(revisionId: string): Promise<RevisionStatus | null> {
+  const now = new Date();
+  const cancelledQueued = await db
+    .update(fitRevision)
+    .set({ status: "cancelled", cancelRequested: now, finishedAt: now, failureReason: null })
+    .where(and(eq(fitRevision.id, revisionId), eq(fitRevision.status, "queued")))
+    .returning({ status: fitRevision.status });
+  if (cancelledQueued[0]) return cancelledQueued[0].status;
+  const stamped = await db
+    .update(fitRevision)
+    .set({ cancelRequested: sql`coalesce(${fitRevision.cancelRequested}, now())` })
+    .where(and(eq(fitRevision.id, revisionId), eq(fitRevision.status, "running")))
+    .returning({ status: fitRevision.status });
+  if (stamped[0]) return stamped[0].status;
+  const rows = await db.select({ status: fitRevision.status }).from(fitRevision).where(eq(fitRevision.id, revisionId));
+  return rows[0]?.status ?? null;
+}
+
+// ----- the worker's side -----
+
+/** A revision, its fit, the workspace's slug and the launcher's address, as the worker loads them. */
+export async function getRevisionForRun(revisionId: string) {
+  const rows = await db
+    .select({ revision: fitRevision, fit, workspaceSlug: organization.slug, launcherEmail: user.email, launcherName: user.name })
+    .from(fitRevision)
+    .innerJoin(fit, eq(fit.id, fitRevision.fitId))
+    .innerJoin(organization, eq(organization.id, fit.workspaceId))
+    .leftJoin(user, eq(user.id, fitRevision.launchedBy))
+    .where(eq(fitRevision.id, revisionId))
+    .limit(1);
+  return rows[0] ?? null;
+}
+
+/**
+ * Starts an attempt: only a queued revision, or a running one whose previous attempt died (its job expired
+ * and was retried), can be claimed. Returns the new attempt number, or null when the revision is final.
+ */
+export async function claimRevision(params: { revisionId: string; runner: string }): Promise<number | null> {
+  const rows = await db
+    .update(fitRevision)
+    .set({ status: "running", attempts: sql`${fitRevision.attempts} + 1`, runner: params.runner, startedAt: new Date(), progress: null })
+    .where(and(eq(fitRevision.id, params.revisionId), inArray(fitRevision.status, ["queued", "running"])))
+    .returning({ attempts: fitRevision.attempts });
+  return rows[0]?.attempts ?? null;
+}
+
+const heldBy = (revisionId: string, attempt: number) =>
+  and(eq(fitRevision.id, revisionId), eq(fitRevision.status, "running"), eq(fitRevision.attempts, attempt));
+
+/** Overwrites the live progress; returns false when the attempt no longer holds the revision. */
+export async function writeProgress(params: { revisionId: string; attempt: number; progress: unknown }): Promise<boolean> {
+  const rows = await db
+    .update(fitRevision)
+    .set({ progress: params.progress })
+    .where(heldBy(params.revisionId, params.attempt))
+    .returning({ id: fitRevision.id });
+  return rows.length > 0;
+}
+
+/**
+ * Why a running attempt should stop: `cancel` when someone asked to cancel (the best point is kept),
+ * `superseded` when the revision is final or another attempt holds it (nothing may be written); else null.
+ */
+export async function stopReason(params: { revisionId: string; attempt: number }): Promise<"cancel" | "superseded" | null> {
+  const rows = await db
+    .select({ cancelRequested: fitRevision.cancelRequested, status: fitRevision.status, attempts: fitRevision.attempts })
+    .from(fitRevision)
+    .where(eq(fitRevision.id, params.revisionId));
+  const row = rows[0];
+  if (!row || row.status !== "running" || row.attempts !== params.attempt) return "superseded";
+  return row.cancelRequested === null ? null : "cancel";
+}
+
+/** Rows per INSERT of residuals (PostgreSQL allows 65 535 bind parameters; a row has 10). */
+const residualChunk = 5000;
+
+/**
+ * Writes the final state with its residual rows in ONE transaction, only while `attempt` still holds the
+ * revision. Returns false (and writes nothing) when it does not: a retried or cancelled attempt lost.
+ */
+export async function finishRevision(params: {
+  revisionId: string;
+  attempt: number;
+  status: "succeeded" | "cancelled";
+  result: unknown;
+  residuals: Omit<NewFitResidual, "revisionId">[];
+}): Promise<boolean> {
+  return db.transaction(async (tx) => {
+    const updated = await tx
+      .update(fitRevision)
+      .set({ status: params.status, result: params.result, finishedAt: new Date(), progress: null, failureReason: null })
+      .where(heldBy(params.revisionId, params.attempt))
+      .returning({ id: fitRevision.id });
+    if (updated.length === 0) return false;
+    for (let i = 0; i < params.residuals.length; i += residualChunk) {
+      const chunk = params.residuals.slice(i, i + residualChunk).map((r) => ({ ...r, revisionId: params.revisionId }));
+      await tx.insert(fitResidual).values(chunk);
+    }
+    return true;
+  });
+}
+
+/**
+ * Ends a revision `failed` with a readable reason. With `attempt`, only while that attempt holds it;
+ * without (the dead-letter path), whenever it is not final yet. Returns whether it changed anything.
+ */
+export async function failRevision(params: { revisionId: string; reason: string; attempt?: number }): Promise<boolean> {
+  const guard =
+    params.attempt === undefined
+      ? and(eq(fitRevision.id, params.revisionId), inArray(fitRevision.status, ["queued", "running"]))
+      : heldBy(params.revisionId, params.attempt);
+  const rows = await db
+    .update(fitRevision)
+    .set({ status: "failed", failureReason: params.reason, finishedAt: new Date(), progress: null })
+    .where(guard)
+    .returning({ id: fitRevision.id });
+  return rows.length > 0;
+}

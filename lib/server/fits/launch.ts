@@ -1,0 +1,168 @@
+import "server-only";
+import { getDatasetForFit, loadDatasetPoints } from "@/db/queries/fit-data";
+import { createFitWithFirstRevision, createNextRevision, failQueuedRevision, setRevisionJob } from "@/db/queries/fits";
+import {
+  type BandFitIssue,
+  type BandFitResult,
+  DEFAULT_BAND_MAPPING,
+  type BandMapping,
+  type EnergyWindow,
+  type FitOptions,
+  type ModelSpec,
+  fitOptionsSchema,
+  resolveModelSpec,
+  validateBandFit,
+} from "@/lib/fit/bands";
+import { env } from "@/lib/env";
+import { type ModelDocument, ModelError } from "@/lib/tb";
+import { AppError } from "../errors";
+import { getQueue } from "../job-queue";
+import { type FitJobData, fitJobExpirySeconds, fitQueue } from "../queues";
+import { type LaunchWarning, checkFrame } from "./frame-check";
+import type { LaunchFitInput, NewRevisionInput } from "./inputs";
+import { type RevisionSnapshot, revisionSnapshotSchema } from "./snapshot";
+
+type RevisionRequest = {
+  workspaceId: string;
+  datasetId: string;
+  model: ModelSpec;
+  mapping?: BandMapping;
+  window?: EnergyWindow;
+  options?: FitOptions;
+};
+
+function refuse(issues: BandFitIssue[]): never {
+  const grouped: Record<string, string[]> = {};
+  for (const { path, message } of issues) (grouped[path || "_form"] ??= []).push(message);
+  const first = issues[0];
+  throw new AppError("validation_failed", first ? (first.path ? `${first.path}: ${first.message}` : first.message) : undefined, { issues: grouped });
+}
+
+/**
+ * Every check BEFORE a revision is created: the dataset belongs to the workspace, the model resolves, and
+ * `validateBandFit` passes on the dataset's own points (mapping onto bands that exist, a window that keeps
+ * points, …). Returns the snapshot to store and the frame check's warnings.
+ * @throws AppError validation_failed listing every problem; nothing is written
+ */
+async function prepareSnapshot(request: RevisionRequest): Promise<{ snapshot: RevisionSnapshot; warnings: LaunchWarning[] }> {
+  const dataset = await getDatasetForFit({ workspaceId: request.workspaceId, datasetId: request.datasetId });
+  if (!dataset) refuse([{ path: "datasetId", message: "there is no dataset with this id in the workspace" }]);
+  let model: ModelDocument;
+  try {
+    model = resolveModelSpec(request.model);
+  } catch (error) {
+    if (error instanceof ModelError) refuse(error.issues.map((i) => ({ path: i.path ? `model.${i.path}` : "model", message: i.message })));
+    throw error;
+  }
+  const points = await loadDatasetPoints(dataset.id);
+  const mapping = request.mapping ?? DEFAULT_BAND_MAPPING;
+  const options = request.options ?? fitOptionsSchema.parse({});
+  const validation = validateBandFit({ points, model, mapping, window: request.window, options });
+  if (!validation.ok) refuse(validation.issues);
+  const snapshot = revisionSnapshotSchema.parse({
+    model,
+    mapping,
+    window: request.window ?? null,
+    options,
+    dataset: { id: dataset.id, name: dataset.name, sha256: dataset.sha256 },
+  });
+  return { snapshot, warnings: checkFrame(dataset.summary.ticks, points, model) };
+}
+
+async function enqueue(revisionId: string, snapshot: RevisionSnapshot): Promise<void> {
+  const boss = await getQueue();
+  const data: FitJobData = { revisionId };
+  const jobId = await boss.send(fitQueue.name, data, {
+    expireInSeconds: fitJobExpirySeconds(snapshot.options.timeLimitMs, env.FIT_JOB_EXPIRY_MARGIN_SECONDS),
+  });
+  if (!jobId) {
+    await failQueuedRevision({ revisionId, reason: "The job queue did not accept the fit." });
+    throw new AppError("unavailable", "The job queue did not accept the fit; try again.");
+  }
+  await setRevisionJob({ revisionId, jobId });
+}
+
+/** Launches a new fit: checks, then the fit and its revision 1, then the job. */
+export async function launchFit(params: { workspaceId: string; userId: string; input: LaunchFitInput }) {
+  const { input } = params;
+  const { snapshot, warnings } = await prepareSnapshot({ workspaceId: params.workspaceId, ...input });
+  const created = await createFitWithFirstRevision({
+    workspaceId: params.workspaceId,
+    datasetId: input.datasetId,
+    name: input.name,
+    notes: input.notes,
+    launchedBy: params.userId,
+    inputs: snapshot,
+    launchWarnings: warnings,
+  });
+  await enqueue(created.revisionId, snapshot);
+  return { fitId: created.fitId, revision: created.number, warnings };
+}
+
+/** Copies a parameter list's values from a fitted one (same names) and applies per-name edits. */
+function withParameters(model: ModelDocument, changes: NewRevisionInput["parameters"]): ModelDocument {
+  const known = new Set(model.parameters.map((p) => p.name));
+  const unknown = Object.keys(changes ?? {}).filter((name) => !known.has(name));
+  if (unknown.length)
+    refuse(unknown.map((name) => ({ path: `parameters.${name}`, message: `the model has no parameter "${name}"` })));
+  return {
+    ...model,
+    parameters: model.parameters.map((p) => {
+      const change = changes?.[p.name];
+      return change ? { ...p, ...Object.fromEntries(Object.entries(change).filter(([, v]) => v !== undefined)) } : p;
+    }),
+  };
+}
+
+/** The parent's options with its fitted offset and renormalisation as start values, then the changes. */
+function nextOptions(parent: RevisionSnapshot, result: BandFitResult | null, changes: Record<string, unknown> | undefined): FitOptions {
+  const fitted = (name: string) => result?.parameters.find((p) => p.name === name)?.value;
+  const offset = fitted("energy offset");
+  const scale = fitted("renormalisation");
+  const base: FitOptions = {
+    ...parent.options,
+    // the parent's values are already fitted; Harrison's would overwrite them
+    harrisonStart: false,
+    energyOffset: { ...parent.options.energyOffset, ...(offset === undefined ? {} : { value: offset }) },
+    renormalisation: { ...parent.options.renormalisation, ...(scale === undefined ? {} : { value: scale }) },
+  };
+  const parsed = fitOptionsSchema.safeParse({ ...base, ...changes });
+  if (!parsed.success) refuse(parsed.error.issues.map((i) => ({ path: ["options", ...i.path.map(String)].join("."), message: i.message })));
+  return parsed.data;
+}
+
+/**
+ * Launches revision n+1 of a fit from revision `from`: its snapshot, with its fitted model (when it has a
+ * result) as the start, plus the changes in `input`.
+ */
+export async function launchRevision(params: {
+  workspaceId: string;
+  userId: string;
+  fitId: string;
+  datasetId: string;
+  parent: { inputs: unknown; result: unknown };
+  input: NewRevisionInput;
+}) {
+  const { input } = params;
+  const parentSnapshot = revisionSnapshotSchema.parse(params.parent.inputs);
+  const parentResult = (params.parent.result ?? null) as BandFitResult | null;
+  const startModel = input.model ?? withParameters(parentResult?.fittedModel ?? parentSnapshot.model, input.parameters);
+  const window = input.window === null ? undefined : (input.window ?? parentSnapshot.window ?? undefined);
+  const { snapshot, warnings } = await prepareSnapshot({
+    workspaceId: params.workspaceId,
+    datasetId: params.datasetId,
+    model: startModel,
+    mapping: input.mapping ?? parentSnapshot.mapping,
+    window,
+    options: nextOptions(parentSnapshot, parentResult, input.options),
+  });
+  const created = await createNextRevision({
+    fitId: params.fitId,
+    parentNumber: input.from,
+    launchedBy: params.userId,
+    inputs: snapshot,
+    launchWarnings: warnings,
+  });
+  await enqueue(created.revisionId, snapshot);
+  return { fitId: params.fitId, revision: created.number, warnings };
+}
