@@ -20,6 +20,14 @@ const envSchema = z.object({
   AUTH_RATE_LIMIT_MAX: z.coerce.number().int().positive().default(10),
   /** Length of that window, seconds. */
   AUTH_RATE_LIMIT_WINDOW_SECONDS: z.coerce.number().int().positive().default(60),
+  /** Fit jobs one worker process runs at once. */
+  WORKER_FIT_CONCURRENCY: z.coerce.number().int().min(1).max(32).default(2),
+  /** How often a worker runs pg-boss maintenance (returns expired jobs of dead workers), seconds. */
+  WORKER_MAINTENANCE_INTERVAL_SECONDS: z.coerce.number().int().min(1).default(30),
+  /** Name a worker records on the revisions it runs; unset: host:pid. */
+  WORKER_NAME: z.string().min(1).optional(),
+  /** Added to a fit's time limit to give its job's expiry (after which a dead worker's fit is retried), seconds. */
+  FIT_JOB_EXPIRY_MARGIN_SECONDS: z.coerce.number().int().min(1).default(15),
   /** Largest dataset file accepted, bytes (25 MiB). */
   DATASET_MAX_BYTES: z.coerce.number().int().positive().default(26_214_400),
   /** Largest number of points (energies) in one dataset. */
