@@ -1,0 +1,9 @@
+export {
+  PHASE_CONVENTION,
+  type ParameterSet,
+  type ParameterSetProvenance,
+  buildParameterSet,
+  parameterSetJsonSchema,
+  parameterSetSchema,
+} from "./parameter-set";
+export { DENSE_PATH_POINTS_PER_INVERSE_ANGSTROM, type EnergyAlignment, type ResidualCsvRow, bandsCsv, residualsCsv } from "./csv";

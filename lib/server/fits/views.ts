@@ -1,0 +1,65 @@
+import "server-only";
+import { type RevisionDetails, getFit, getRevision } from "@/db/queries/fits";
+import type { BandFitResult } from "@/lib/fit/bands";
+import { AppError } from "../errors";
+import { type RevisionSnapshot, revisionSnapshotSchema } from "./snapshot";
+
+/** A stored result: the band fit result without its per-point residuals (those are rows). */
+export type StoredResult = Omit<BandFitResult, "residuals">;
+
+/** Parses a revision number from the URL; anything else is a 404. */
+export function revisionNumber(raw: string | undefined): number {
+  const n = Number(raw);
+  if (!Number.isInteger(n) || n < 1 || String(n) !== raw) throw new AppError("not_found");
+  return n;
+}
+
+/** The fit of the workspace or 404. */
+export async function requireFit(workspaceId: string, fitId: string | undefined) {
+  const found = fitId ? await getFit({ workspaceId, fitId }) : null;
+  if (!found) throw new AppError("not_found", "No such fit in this workspace.");
+  return found;
+}
+
+/** The revision of the workspace's fit or 404. */
+export async function requireRevision(workspaceId: string, params: Record<string, string>): Promise<RevisionDetails> {
+  const found = params.fitId ? await getRevision({ workspaceId, fitId: params.fitId, number: revisionNumber(params.n) }) : null;
+  if (!found) throw new AppError("not_found", "No such revision of this fit.");
+  return found;
+}
+
+/** The revision's snapshot (its stored inputs). */
+export function snapshotOf(details: RevisionDetails): RevisionSnapshot {
+  return revisionSnapshotSchema.parse(details.revision.inputs);
+}
+
+/** The revision's stored result or 409 when it has none (still queued or running, or failed). */
+export function requireResult(details: RevisionDetails): StoredResult {
+  const result = details.revision.result as StoredResult | null;
+  if (!result) throw new AppError("conflict", `Revision ${details.revision.number} has no result yet (status: ${details.revision.status}).`);
+  return result;
+}
+
+/** The JSON view of a revision served by `GET …/revisions/{n}`. */
+export function revisionView(details: RevisionDetails) {
+  const { revision, fit } = details;
+  return {
+    fitId: fit.id,
+    fitName: fit.name,
+    number: revision.number,
+    parentNumber: revision.parentNumber,
+    status: revision.status,
+    progress: revision.progress,
+    attempts: revision.attempts,
+    runner: revision.runner,
+    failureReason: revision.failureReason,
+    cancelRequested: revision.cancelRequested,
+    launchedBy: details.launcherName,
+    createdAt: revision.createdAt,
+    startedAt: revision.startedAt,
+    finishedAt: revision.finishedAt,
+    launchWarnings: revision.launchWarnings,
+    inputs: revision.inputs,
+    result: revision.result,
+  };
+}
