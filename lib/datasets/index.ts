@@ -18,7 +18,7 @@ export { type FileIssue, LISTED_ISSUE_LIMIT, describeFileIssue } from "./issues"
 export { type ParseOptions, DEFAULT_MAX_BYTES, DEFAULT_MAX_POINTS, describeByteLimit } from "./options";
 export { type Delimiter, type DelimiterChoice, detectDelimiter, describeDelimiter } from "./delimiter";
 export { kColumnsToCartesian, labelledPointToCartesian } from "./kCoordinates";
-export { type PathVertex, buildKPath, interpolateAlongPath } from "./kPath";
+export { type PathVertex, placePathVertices, interpolateAlongPath } from "./kPath";
 export {
   type ColumnRole,
   type ColumnGuess,

@@ -14,7 +14,7 @@ export interface PathVertex {
  * @param points - the vertices in path order
  * @param lattice - real-space lattice in Å (for reduced vertices)
  */
-export function buildKPath(points: readonly LabelledKPoint[], lattice: readonly Vec3[] | undefined): PathVertex[] {
+export function placePathVertices(points: readonly LabelledKPoint[], lattice: readonly Vec3[] | undefined): PathVertex[] {
   const vertices: PathVertex[] = [];
   for (const p of points) {
     const k = labelledPointToCartesian(p, lattice);
@@ -28,7 +28,7 @@ export function buildKPath(points: readonly LabelledKPoint[], lattice: readonly 
 /**
  * The Cartesian k at distance s along a path, by linear interpolation inside the segment that holds s.
  * Distances before the start or past the end are clamped to the end vertices.
- * @param path - vertices from {@link buildKPath} (total length > 0)
+ * @param path - vertices from {@link placePathVertices} (total length > 0)
  * @param s - distance along the path in 1/Å
  * @param hint - segment index to start searching from (the previous call's answer; files are mostly sorted)
  * @returns Cartesian k in 1/Å and the segment index used

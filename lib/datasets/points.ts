@@ -2,7 +2,7 @@ import type { Vec3 } from "@/lib/tb/geometry/vec3";
 import { norm, sub } from "@/lib/tb/geometry/vec3";
 import type { IssueCollector } from "./issues";
 import { kColumnsToCartesian } from "./kCoordinates";
-import { buildKPath, interpolateAlongPath } from "./kPath";
+import { placePathVertices, interpolateAlongPath } from "./kPath";
 import type { DatasetMapping } from "./mapping";
 import type { RawPoint } from "./rowReader";
 
@@ -111,7 +111,7 @@ function resolveCoordinates(raw: readonly RawPoint[], mapping: DatasetMapping): 
   if (labelled && points.length > 0) {
     const lattice = mapping.k.lattice;
     const firstBand = points.filter((p) => p.band === points[0].band);
-    const vertices = buildKPath(labelled, lattice);
+    const vertices = placePathVertices(labelled, lattice);
     let from = 0;
     for (const v of vertices) {
       const at = firstBand.findIndex((p, i) => i >= from && norm(sub(p.k, v.k)) < LABELLED_POINT_TOLERANCE);
@@ -127,7 +127,7 @@ function resolveCoordinates(raw: readonly RawPoint[], mapping: DatasetMapping): 
 }
 
 function resolvePathDistances(raw: readonly RawPoint[], mapping: DatasetMapping, issues: IssueCollector): ResolvedPoints | null {
-  const vertices = buildKPath(mapping.k.path ?? [], mapping.k.lattice);
+  const vertices = placePathVertices(mapping.k.path ?? [], mapping.k.lattice);
   const length = vertices.at(-1)?.distance ?? 0;
   if (!(length > 0)) {
     issues.addRow(null, "the labelled points of the path all lie at the same k; the path has no length");

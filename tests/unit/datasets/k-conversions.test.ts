@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { buildKPath, datasetMappingSchema, interpolateAlongPath, kColumnsToCartesian, parseDispersionFile } from "@/lib/datasets";
+import { placePathVertices, datasetMappingSchema, interpolateAlongPath, kColumnsToCartesian, parseDispersionFile } from "@/lib/datasets";
 import { cartesianToReduced } from "@/lib/tb/geometry/lattice";
 import type { Vec3 } from "@/lib/tb/geometry/vec3";
 
@@ -27,7 +27,7 @@ describe("k conversions", () => {
   });
 
   it("places path vertices at cumulative |Δk| and interpolates inside segments", () => {
-    const path = buildKPath(
+    const path = placePathVertices(
       [
         { label: "Γ", k: [0, 0], coordinates: "reduced" },
         { label: "X", k: [0.5, 0], coordinates: "reduced" },
