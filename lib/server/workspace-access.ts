@@ -31,11 +31,16 @@ export async function authorizeWorkspace(
 }
 
 /**
- * For pages: sends a signed-out visitor to sign-in, calls notFound() for a non-member, and throws
- * AppError("forbidden") for a member below `minimumRole` (the segment's error boundary shows it).
+ * For pages: sends a signed-out visitor to sign-in (and back to `returnTo` afterwards, by default the
+ * workspace home), calls notFound() for a non-member, and throws AppError("forbidden") for a member below
+ * `minimumRole` (the segment's error boundary shows it).
  */
-export async function requireWorkspaceMember(slug: string, minimumRole: WorkspaceRole = "viewer"): Promise<WorkspaceAccess> {
-  const user = await requireUser(`/w/${encodeURIComponent(slug)}`);
+export async function requireWorkspaceMember(
+  slug: string,
+  minimumRole: WorkspaceRole = "viewer",
+  returnTo = `/w/${encodeURIComponent(slug)}`,
+): Promise<WorkspaceAccess> {
+  const user = await requireUser(returnTo);
   try {
     return await authorizeWorkspace({ user, via: "session" }, slug, minimumRole);
   } catch (error) {
