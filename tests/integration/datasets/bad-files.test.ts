@@ -79,7 +79,7 @@ describe("bad files through POST /api/workspaces/{slug}/datasets", () => {
 
   it("refuses more points than the limit (500 000 default)", async () => {
     const rows = Array.from({ length: 500_001 }, (_, i) => `${(i * 1e-6).toFixed(6)},1,-1,0.01`);
-    const refusal = await expectRefused(file(...rows), { row: expect.any(Number) as unknown as number, column: null });
+    const refusal = await expectRefused(`${header}\n${rows.join("\n")}\n`, { row: expect.any(Number) as unknown as number, column: null });
     expect(refusal.error.issues.at(-1)?.message).toMatch(/500,000 points/);
   });
 
