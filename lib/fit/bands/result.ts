@@ -1,4 +1,5 @@
 import type { LeastSquaresResult } from "../least-squares";
+import { dataEnergyScale, implausibleParameterWarnings } from "./plausibility";
 import type { PreparedBandFit } from "./validate";
 import type { BandFitResult, BandFitWarning } from "./schema";
 
@@ -25,9 +26,19 @@ export function assembleBandFitResult(
   fitMs: number,
 ): BandFitResult {
   const { parameters: specs, units, selection, residualModel, compiled } = prepared;
-  const warnings: BandFitWarning[] = [...prepared.warnings, ...fit.warnings];
-  const undetermined = new Set(warnings.filter((w) => UNDETERMINING.includes(w.kind)).flatMap((w) => w.parameters));
   const modelCount = compiled.parameters.length;
+  const plausibility = fit.parameters.map((parameter, j) => ({
+    parameter,
+    unit: units[j],
+    isOverlap: j < modelCount && compiled.parameterMatrix[j] === "overlap",
+  }));
+  const scale = dataEnergyScale(selection.kept.map((point) => point.energy));
+  const warnings: BandFitWarning[] = [
+    ...prepared.warnings,
+    ...fit.warnings,
+    ...implausibleParameterWarnings(plausibility, scale),
+  ];
+  const undetermined = new Set(warnings.filter((w) => UNDETERMINING.includes(w.kind)).flatMap((w) => w.parameters));
 
   const parameters = fit.parameters
     .map((p, j) => ({

@@ -170,6 +170,7 @@ function assembleResult(input: AssemblyInput): LeastSquaresResult {
     observations: n,
     chiSquared: best.chiSquared,
     names: freeNames,
+    sizes: Float64Array.from(freeIndices, (j, k) => Math.max(Math.abs(best.current[k]), Math.abs(prepared.initial[j]))),
     singularTolerance: options.singularTolerance,
     correlationWarning: options.correlationWarning,
   });

@@ -9,6 +9,12 @@ export interface StatisticsInput {
   chiSquared: number;
   /** Names of the free parameters. */
   names: string[];
+  /**
+   * A typical size of each free parameter in its own unit (the larger of |value| and |start|; 0 when
+   * both are 0): ‖J_k‖·size_k is the change of the whitened model for a 100 % change of θ_k, which
+   * compares across units.
+   */
+  sizes: Float64Array;
   /** Relative eigenvalue of the normalised JᵀWJ below which a direction is undetermined. */
   singularTolerance: number;
   /** |correlation| above which a pair is reported. */
@@ -32,10 +38,11 @@ const NULL_SPACE_COMPONENT = 0.01;
  * of the column-normalised Jacobian J·D, D = diag(1/‖J_k‖), so that parameters of any unit compare:
  * JᵀWJ = D⁻¹ V Σ² Vᵀ D⁻¹. Directions with σ_i² < tol·σ_max² are undetermined; a parameter with a share
  * in them gets no standard error, the others get theirs from the pseudo-inverse (exact for parameters
- * orthogonal to the undetermined directions). A zero Jacobian column is a parameter with no effect.
+ * orthogonal to the undetermined directions). A zero Jacobian column, or one whose effect (‖J_k‖ times the
+ * parameter's size) is negligible beside the others', is a parameter with no effect.
  */
 export function solutionStatistics(input: StatisticsInput): SolutionStatistics {
-  const { jacobian, observations: n, chiSquared, names, singularTolerance, correlationWarning } = input;
+  const { jacobian, observations: n, chiSquared, names, sizes, singularTolerance, correlationWarning } = input;
   const p = names.length;
   const warnings: FitWarning[] = [];
   const s2 = chiSquared / (n - p);
@@ -43,13 +50,23 @@ export function solutionStatistics(input: StatisticsInput): SolutionStatistics {
   const columnNorms = new Float64Array(p);
   for (let i = 0; i < n; i++) for (let k = 0; k < p; k++) columnNorms[k] += jacobian[i * p + k] ** 2;
   columnNorms.forEach((squared, k) => (columnNorms[k] = Math.sqrt(squared)));
-  const active = names.map((_, k) => k).filter((k) => columnNorms[k] > 0);
+  // A vanishing effect relative to the others (same tolerance as the SVD's, on squared norms) is as
+  // undetermined as a zero column, but the column normalisation below would hide it.
+  const effects = Float64Array.from(columnNorms, (norm, k) => norm * sizes[k]);
+  const largestEffect = Math.max(...effects);
+  const negligible = (k: number) =>
+    columnNorms[k] === 0 || (sizes[k] > 0 && effects[k] ** 2 < singularTolerance * largestEffect ** 2);
+  const active = names.map((_, k) => k).filter((k) => !negligible(k));
   for (let k = 0; k < p; k++)
-    if (columnNorms[k] === 0)
+    if (negligible(k))
       warnings.push({
         kind: "no-effect",
         parameters: [names[k]],
-        message: `${names[k]} has no effect on the model at the solution (zero Jacobian column): the data do not determine it`,
+        message:
+          columnNorms[k] === 0
+            ? `${names[k]} has no effect on the model at the solution (zero Jacobian column): the data do not determine it`
+            : `${names[k]} has almost no effect on the model at the solution (changing it by 100 % moves the fit ` +
+              `${(effects[k] / largestEffect).toExponential(1)} times as much as the most effective parameter): the data do not determine it`,
       });
 
   // (JᵀWJ)⁺ without the factor s², so correlations stay defined when χ² = 0 (exact data).

@@ -18,6 +18,15 @@ const spFromCombined = (v: number) => (S3 / 4) * v;
 
 const SP3S_ORBITALS = ["s", "px", "py", "pz", "s*"] as const;
 
+/**
+ * Default lower bound of an s* on-site energy: the same species' default p level. The s* orbital is
+ * Vogl, Hjalmarson & Dow's excited s state, introduced to mimic the higher conduction states, and
+ * their E_s* lies above E_p for every material they list (from memory). Without the bound, a fit to
+ * valence bands alone pulls s* down into the valence region (a different model); with it, the data's
+ * indifference shows as a runaway that the fit flags (valence bands see only V_s*p² / (E_s* − E)).
+ */
+const sStarAbove = (pLevel: number) => ({ min: pLevel });
+
 export const diamondSp3sStar: TemplateDefinition = {
   id: "diamond-sp3s-star",
   title: "Diamond sp3s* (nearest neighbours)",
@@ -25,7 +34,8 @@ export const diamondSp3sStar: TemplateDefinition = {
   dimension: 3,
   source:
     "Silicon parameters of Vogl, Hjalmarson & Dow, J. Phys. Chem. Solids 44, 365 (1983), converted from their combined " +
-    "elements to bond integrals; V(s*,s*) = V(s,s*) = 0 as in the paper; a = 5.431 Å",
+    "elements to bond integrals; V(s*,s*) = V(s,s*) = 0 as in the paper; a = 5.431 Å. Default bound E_s* ≥ E_p: s* is " +
+    "their excited s state above the p level (from memory)",
   latticeConstant: { value: 5.431, meaning: "cube edge a" },
   lattice: fccVectors,
   sites: [
@@ -40,7 +50,7 @@ export const diamondSp3sStar: TemplateDefinition = {
       parameters: [
         parameter("E_s[Si]", -4.2, "on-site energy of s"),
         parameter("E_p[Si]", 1.715, "on-site energy of p"),
-        parameter("E_s*[Si]", 6.685, "on-site energy of the excited s*"),
+        parameter("E_s*[Si]", 6.685, "on-site energy of the excited s*, kept above the p level", sStarAbove(1.715)),
         parameter("V_ss_sigma[Si-Si,1]", pp.ss, "ssσ, nearest neighbours"),
         parameter("V_sp_sigma[Si-Si,1]", spFromCombined(5.7292), "spσ, nearest neighbours"),
         parameter("V_pp_sigma[Si-Si,1]", pp.ppSigma, "ppσ, nearest neighbours"),
@@ -61,7 +71,8 @@ export const zincblendeSp3sStar: TemplateDefinition = {
   dimension: 3,
   source:
     "GaAs parameters of Vogl, Hjalmarson & Dow, J. Phys. Chem. Solids 44, 365 (1983) (values from memory, not checked " +
-    "against the paper), converted to bond integrals; a = 5.6533 Å (from memory)",
+    "against the paper), converted to bond integrals; a = 5.6533 Å (from memory). Default bounds E_s* ≥ E_p of the same species: s* is " +
+    "their excited s state above the p level (from memory)",
   latticeConstant: { value: 5.6533, meaning: "cube edge a" },
   lattice: fccVectors,
   sites: [
@@ -76,10 +87,10 @@ export const zincblendeSp3sStar: TemplateDefinition = {
       parameters: [
         parameter("E_s[As]", -8.3431, "anion s on-site energy"),
         parameter("E_p[As]", 1.0414, "anion p on-site energy"),
-        parameter("E_s*[As]", 8.5914, "anion s* on-site energy"),
+        parameter("E_s*[As]", 8.5914, "anion s* on-site energy, kept above the anion p level", sStarAbove(1.0414)),
         parameter("E_s[Ga]", -2.6569, "cation s on-site energy"),
         parameter("E_p[Ga]", 3.6686, "cation p on-site energy"),
-        parameter("E_s*[Ga]", 6.7386, "cation s* on-site energy"),
+        parameter("E_s*[Ga]", 6.7386, "cation s* on-site energy, kept above the cation p level", sStarAbove(3.6686)),
         parameter("V_ss_sigma[As-Ga,1]", pp.ss, "ssσ"),
         parameter("V_pp_sigma[As-Ga,1]", pp.ppSigma, "ppσ"),
         parameter("V_pp_pi[As-Ga,1]", pp.ppPi, "ppπ"),

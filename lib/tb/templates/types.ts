@@ -38,12 +38,19 @@ export interface TemplateDefinition {
   body(geometry: TemplateGeometry): TemplateBody;
 }
 
-/** A parameter declaration with the usual defaults (free unless stated). */
+/** A parameter declaration with the usual defaults (free unless stated, no bounds unless given). */
 export function parameter(
   name: string,
   value: number,
   description: string,
-  options: { unit?: "eV" | "1"; free?: boolean } = {},
+  options: { unit?: "eV" | "1"; free?: boolean; min?: number } = {},
 ): ModelParameter {
-  return { name, value, unit: options.unit ?? "eV", free: options.free ?? true, description };
+  return {
+    name,
+    value,
+    unit: options.unit ?? "eV",
+    free: options.free ?? true,
+    description,
+    ...(options.min !== undefined ? { min: options.min } : {}),
+  };
 }

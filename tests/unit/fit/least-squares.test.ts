@@ -113,6 +113,25 @@ describe("σ weighting", () => {
 });
 
 describe("undetermined parameters", () => {
+  it("flags a parameter whose effect is negligible beside the others' (tiny but non-zero Jacobian column)", () => {
+    // c enters as 1e-9·c·x² and is bounded to [0.1, 0.5] (so it cannot wander off to fit the noise): a
+    // 100 % change of c moves the model ~1e-9 times as much as one of b, a squared ratio ~1e-18, below the
+    // default singularTolerance 1e-12 (constructed case).
+    const base = lineProblem((theta, x) => 1e-9 * theta[2] * x * x, (x) => [1e-9 * x * x]);
+    const result = fitLeastSquares({
+      ...base,
+      parameters: base.parameters.map((p) => (p.name === "c" ? { ...p, lower: 0.1, upper: 0.5 } : p)),
+    });
+    const warning = result.warnings.find((w) => w.kind === "no-effect");
+    expect(warning?.parameters).toEqual(["c"]);
+    expect(warning?.message).toContain("almost no effect");
+    expect(result.parameters[2].standardError).toBeNull();
+    // a and b keep their errors: truth a = 1, b = 2 within 4 standard errors (normal theory).
+    expect(Math.abs(result.parameters[0].value - 1)).toBeLessThan(4 * result.parameters[0].standardError!);
+    expect(Math.abs(result.parameters[1].value - 2)).toBeLessThan(4 * result.parameters[1].standardError!);
+    expectAllFinite(result);
+  });
+
   it("flags a parameter with no effect, gives it no standard error and keeps every number finite", () => {
     const result = fitLeastSquares(lineProblem(() => 0, () => [0]));
     expect(result.warnings.map((w) => [w.kind, w.parameters])).toContainEqual(["no-effect", ["c"]]);
