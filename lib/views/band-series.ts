@@ -114,3 +114,55 @@ export function energyDomain(points: readonly ChartDataPoint[], zoom?: { min: nu
   const pad = (high - low || 1) * 0.05;
   return [low - pad, high + pad];
 }
+
+/**
+ * The energy terms a revision used: δ and Z from the fitted parameters named "energy offset" and
+ * "renormalisation" (the band fit lists them when free or not neutral), else from the options.
+ */
+export function revisionTransform(
+  parameters: readonly { name: string; value: number }[],
+  options: { energyOffset: { value: number }; renormalisation: { value: number; reference: number } },
+): EnergyTransform {
+  const fitted = (name: string) => parameters.find((p) => p.name === name)?.value;
+  return {
+    offset: fitted("energy offset") ?? options.energyOffset.value,
+    renormalisation: fitted("renormalisation") ?? options.renormalisation.value,
+    reference: options.renormalisation.reference,
+  };
+}
+
+/** A residual (model − data, eV) at a path distance, for the residual chart. */
+export interface ChartResidual {
+  band: number;
+  x: number;
+  y: number;
+}
+
+/**
+ * Residuals for the chart, model − data in eV, from model energies at each point's own k-point: offset
+ * mapping compares with the mapped band, nearest mapping with the closest model band. Points outside the
+ * window or unmapped are left out, as in the fit.
+ * @param points - dataset points with their k-point index
+ * @param modelEnergies - k index → model band energies (ascending, eV, offset and renormalisation applied)
+ * @param modelBandOf - data band → model band (1-based), or "nearest"
+ */
+export function chartResiduals(
+  points: readonly (ChartDataPoint & { kIndex: number })[],
+  modelEnergies: ReadonlyMap<number, readonly number[]>,
+  modelBandOf: (dataBand: number) => number | null | "nearest",
+  window?: { min: number; max: number } | null,
+): ChartResidual[] {
+  const result: ChartResidual[] = [];
+  for (const p of points) {
+    if (window && (p.energy < window.min || p.energy > window.max)) continue;
+    const energies = modelEnergies.get(p.kIndex);
+    const target = modelBandOf(p.band);
+    if (!energies || target === null) continue;
+    const model =
+      target === "nearest"
+        ? energies.reduce((best, e) => (Math.abs(e - p.energy) < Math.abs(best - p.energy) ? e : best), energies[0])
+        : energies[target - 1];
+    if (model !== undefined) result.push({ band: p.band, x: p.pathDistance, y: model - p.energy });
+  }
+  return result;
+}

@@ -13,6 +13,9 @@ export {
   distinctKPoints,
   energyDomain,
   modelBandLines,
+  type ChartResidual,
+  chartResiduals,
+  revisionTransform,
 } from "./band-series";
 export {
   type BandComparisonRow,

@@ -1,13 +1,7 @@
 import { z } from "zod";
-import {
-  bandMappingSchema,
-  energyWindowSchema,
-  fitOptionsSchema,
-  templateModelSpecSchema,
-  type BandMappingInput,
-  type FitOptionsInput,
-} from "@/lib/fit/bands/schema";
-import { type ModelDocument, type ModelParameter, type TemplateId, modelDocumentSchema } from "@/lib/tb";
+import type { BandMappingInput, FitOptionsInput } from "@/lib/fit/bands/schema";
+import { launchFitSchema } from "@/lib/server/fits/inputs";
+import type { ModelDocument, ModelParameter, TemplateId } from "@/lib/tb";
 import { FieldErrors } from "./number-field";
 
 /** A parameter row of the launch form, as typed (numbers are text until the form is read). */
@@ -57,18 +51,9 @@ export interface LaunchDraft {
   };
 }
 
-/** The body of `POST /api/workspaces/{slug}/fits` (issue 5), built from the same zod schemas as the route's. */
-export const launchRequestSchema = z
-  .object({
-    datasetId: z.string().min(1, "pick a dataset"),
-    name: z.string().trim().min(1, "give the fit a name").max(120, "at most 120 characters"),
-    model: z.union([modelDocumentSchema, templateModelSpecSchema]),
-    mapping: bandMappingSchema,
-    window: energyWindowSchema.optional(),
-    options: fitOptionsSchema,
-  })
-  .strict();
-export type LaunchRequest = z.input<typeof launchRequestSchema>;
+/** The body of `POST /api/workspaces/{slug}/fits`: the route's own schema. */
+export const launchRequestSchema = launchFitSchema;
+export type LaunchRequest = z.input<typeof launchFitSchema>;
 
 export type DraftReading = { ok: true; request: LaunchRequest } | { ok: false; errors: Record<string, string[]> };
 

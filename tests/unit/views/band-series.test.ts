@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { buildTemplate } from "@/lib/tb";
-import { dataSeriesByBand, distinctKPoints, energyDomain, modelBandLines } from "@/lib/views/band-series";
+import { chartResiduals, dataSeriesByBand, distinctKPoints, energyDomain, modelBandLines, revisionTransform } from "@/lib/views/band-series";
 
 describe("dataSeriesByBand", () => {
   it("groups points by band and sorts each along the path", () => {
@@ -60,5 +60,32 @@ describe("distinctKPoints and energyDomain", () => {
     const points = [{ band: 1, pathDistance: 0, energy: -1 }, { band: 1, pathDistance: 1, energy: 1 }];
     expect(energyDomain(points)).toEqual([-1.1, 1.1]);
     expect(energyDomain(points, { min: -0.5, max: 0.5 })).toEqual([-0.5, 0.5]);
+  });
+});
+
+describe("chartResiduals and revisionTransform", () => {
+  const energies = new Map([[0, [-1, 2]], [1, [-0.5, 1.5]]]);
+  const points = [
+    { kIndex: 0, band: 1, pathDistance: 0, energy: -1.1 },
+    { kIndex: 1, band: 2, pathDistance: 1, energy: 1.4 },
+    { kIndex: 1, band: 3, pathDistance: 1, energy: 9 },
+  ];
+
+  it("compares each point with its mapped model band and drops unmapped and out-of-window points", () => {
+    const r = chartResiduals(points, energies, (b) => (b <= 2 ? b : null));
+    expect(r.map((x) => x.band)).toEqual([1, 2]);
+    expect(r[0].y).toBeCloseTo(0.1, 12); // model − data: −1 − (−1.1)
+    expect(r[1].y).toBeCloseTo(0.1, 12);
+    expect(chartResiduals(points, energies, (b) => (b <= 2 ? b : null), { min: 0, max: 5 })).toHaveLength(1);
+  });
+
+  it("uses the closest model band for nearest mapping", () => {
+    const r = chartResiduals(points.slice(0, 2), energies, () => "nearest");
+    expect(r.map((x) => x.y)).toEqual([expect.closeTo(0.1, 12), expect.closeTo(0.1, 12)]);
+  });
+
+  it("takes δ and Z from fitted parameters when present, else from the options", () => {
+    const options = { energyOffset: { value: 0.2 }, renormalisation: { value: 1.5, reference: -0.1 } };
+    expect(revisionTransform([{ name: "energy offset", value: 0.05 }], options)).toEqual({ offset: 0.05, renormalisation: 1.5, reference: -0.1 });
   });
 });

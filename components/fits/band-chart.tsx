@@ -1,0 +1,120 @@
+"use client";
+
+import { CartesianGrid, ComposedChart, Line, ReferenceArea, ResponsiveContainer, Scatter, Tooltip, XAxis, YAxis } from "recharts";
+import type { ChartPoint, PathTick } from "@/lib/views";
+import { tickLabeller } from "@/lib/views/ticks";
+
+/** Data points of one band, drawn as dots. */
+export interface PointSeries {
+  key: string;
+  label: string;
+  colour: string;
+  points: ChartPoint[];
+}
+
+/** A model band, drawn as a line (y null breaks it at a path jump). */
+export interface LineSeries {
+  key: string;
+  label: string;
+  colour: string;
+  points: { x: number; y: number | null }[];
+  dashed?: boolean;
+  /** thin lines for model bands no data band maps to */
+  faint?: boolean;
+}
+
+interface BandChartProps {
+  points: PointSeries[];
+  lines: LineSeries[];
+  ticks: PathTick[];
+  /** energy axis range, eV */
+  energyDomain: [number, number];
+  /** a shaded energy window, eV (the fit's window on the preview) */
+  window?: { min: number; max: number };
+  /** y axis title; the default is the band energy */
+  energyTitle?: string;
+  /** what the chart shows, for screen readers (the figure's accessible name) */
+  description: string;
+  height?: number;
+}
+
+const AXIS_FONT = { fontSize: 12, fill: "#4b5563" };
+
+/**
+ * Energy against path distance: data as dots, model bands as lines, labelled high-symmetry ticks with
+ * vertical grid lines at them. Zooming is the caller's `energyDomain`.
+ */
+export function BandChart({ points, lines, ticks, energyDomain, window, energyTitle = "E (eV)", description, height = 360 }: BandChartProps) {
+  const tickPositions = ticks.map((t) => t.position);
+  const xDomain: [number, number] =
+    tickPositions.length >= 2
+      ? [tickPositions[0], tickPositions[tickPositions.length - 1]]
+      : [Math.min(...points.flatMap((s) => s.points.map((p) => p.x)), 0), Math.max(...points.flatMap((s) => s.points.map((p) => p.x)), 1)];
+  return (
+    <figure role="img" aria-label={description} className="w-full">
+      <ResponsiveContainer width="100%" height={height}>
+        <ComposedChart margin={{ top: 8, right: 16, bottom: 24, left: 8 }}>
+          <CartesianGrid stroke="#e5e7eb" vertical={false} />
+          {tickPositions.map((x) => (
+            <ReferenceArea key={`tick-${x}`} x1={x} x2={x} stroke="#9ca3af" strokeOpacity={0.6} ifOverflow="hidden" />
+          ))}
+          {window ? <ReferenceArea y1={window.min} y2={window.max} fill="#1c5264" fillOpacity={0.06} stroke="#1c5264" strokeOpacity={0.4} strokeDasharray="4 3" ifOverflow="hidden" /> : null}
+          <XAxis
+            type="number"
+            dataKey="x"
+            domain={xDomain}
+            ticks={tickPositions.length ? tickPositions : undefined}
+            tickFormatter={tickPositions.length ? tickLabeller(ticks) : (v: number) => v.toFixed(2)}
+            tick={AXIS_FONT}
+            allowDataOverflow
+            label={{ value: "k along the path (1/Å)", position: "insideBottom", offset: -14, ...AXIS_FONT }}
+          />
+          <YAxis
+            type="number"
+            dataKey="y"
+            domain={energyDomain}
+            allowDataOverflow
+            tick={AXIS_FONT}
+            tickFormatter={(v: number) => (Math.abs(v) < 1e-9 ? "0" : v.toFixed(1).replace("-", "\u2212"))}
+            label={{ value: energyTitle, angle: -90, position: "insideLeft", ...AXIS_FONT }}
+            width={56}
+          />
+          <Tooltip
+            isAnimationActive={false}
+            formatter={(value) => (typeof value === "number" ? `${value.toFixed(3).replace("-", "\u2212")}` : String(value))}
+            labelFormatter={() => ""}
+          />
+          {lines.map((line) => (
+            <Line
+              key={line.key}
+              name={line.label}
+              data={line.points}
+              dataKey="y"
+              type="linear"
+              stroke={line.colour}
+              strokeWidth={line.faint ? 1 : 2}
+              strokeOpacity={line.faint ? 0.6 : 1}
+              strokeDasharray={line.dashed ? "6 4" : undefined}
+              dot={false}
+              activeDot={false}
+              connectNulls={false}
+              isAnimationActive={false}
+            />
+          ))}
+          {points.map((series) => (
+            <Scatter key={series.key} name={series.label} data={series.points} fill={series.colour} shape="circle" isAnimationActive={false} r={2} />
+          ))}
+        </ComposedChart>
+      </ResponsiveContainer>
+      <figcaption className="mt-1 flex flex-wrap gap-x-4 gap-y-1 text-xs text-ink-muted">
+        <span>Dots: data. Lines: model.</span>
+        {points.map((s) => (
+          <span key={s.key} className="inline-flex items-center gap-1">
+            <span aria-hidden="true" className="inline-block size-2.5 rounded-full" style={{ backgroundColor: s.colour }} />
+            {s.label}
+          </span>
+        ))}
+      </figcaption>
+    </figure>
+  );
+}

@@ -1,0 +1,84 @@
+"use client";
+
+import { useState } from "react";
+import { correlationCells } from "@/lib/views/heatmap";
+
+const format = (v: number | null) => (v === null ? "not determined" : v.toFixed(3).replace("-", "\u2212"));
+
+/**
+ * Correlation of the free parameters as coloured cells (blue −1, white 0, vermillion +1); the value shows
+ * on hover or focus, and the same numbers are in the table below for screen readers and copying.
+ */
+export function CorrelationHeatmap({ names, matrix }: { names: string[]; matrix: (number | null)[][] }) {
+  const [active, setActive] = useState<string | null>(null);
+  if (names.length === 0) return <p className="text-sm text-ink-muted">No free parameters, so there is nothing to correlate.</p>;
+  const cells = correlationCells(names, matrix);
+  const activeCell = cells.find((c) => `${c.row}-${c.column}` === active);
+  return (
+    <div className="flex flex-col gap-3">
+      <p className="h-5 text-sm tabular-nums" aria-live="polite">
+        {activeCell ? `${activeCell.rowName} × ${activeCell.columnName}: ${format(activeCell.value)}` : "Point at a cell to read its correlation."}
+      </p>
+      <div className="overflow-x-auto" aria-hidden="true">
+        <div className="inline-grid gap-px bg-line p-px" style={{ gridTemplateColumns: `auto repeat(${names.length}, 2.25rem)` }}>
+          <div className="bg-surface" />
+          {names.map((n) => (
+            <div key={`h-${n}`} className="flex h-24 items-end justify-center bg-surface pb-1 text-xs">
+              <span className="[writing-mode:vertical-rl] rotate-180 whitespace-nowrap">{n}</span>
+            </div>
+          ))}
+          {names.map((rowName, row) => (
+            <div key={`r-${rowName}`} className="contents">
+              <div className="flex items-center justify-end bg-surface px-2 text-xs whitespace-nowrap">{rowName}</div>
+              {cells
+                .filter((c) => c.row === row)
+                .map((c) => (
+                  <div
+                    key={`${c.row}-${c.column}`}
+                    tabIndex={-1}
+                    onMouseEnter={() => setActive(`${c.row}-${c.column}`)}
+                    onMouseLeave={() => setActive(null)}
+                    title={`${c.rowName} × ${c.columnName}: ${format(c.value)}`}
+                    className={c.strong ? "size-9 outline-2 -outline-offset-2 outline-ink" : "size-9"}
+                    style={{ backgroundColor: c.fill }}
+                  />
+                ))}
+            </div>
+          ))}
+        </div>
+      </div>
+      <details className="text-sm">
+        <summary className="cursor-pointer text-accent-700">Correlations as a table</summary>
+        <div className="mt-2 overflow-x-auto">
+          <table className="border-collapse text-xs tabular-nums">
+            <caption className="sr-only">Correlation matrix of the free parameters</caption>
+            <thead>
+              <tr>
+                <th scope="col" className="px-2 py-1" />
+                {names.map((n) => (
+                  <th key={n} scope="col" className="px-2 py-1 text-right font-medium">
+                    {n}
+                  </th>
+                ))}
+              </tr>
+            </thead>
+            <tbody>
+              {matrix.map((values, row) => (
+                <tr key={names[row]} className="border-t border-line">
+                  <th scope="row" className="px-2 py-1 text-left font-medium">
+                    {names[row]}
+                  </th>
+                  {values.map((v, col) => (
+                    <td key={col} className="px-2 py-1 text-right">
+                      {format(v)}
+                    </td>
+                  ))}
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      </details>
+    </div>
+  );
+}
