@@ -1,0 +1,146 @@
+import { beforeAll, describe, expect, it } from "vitest";
+import { countResiduals } from "@/db/queries/fit-residuals";
+import { getRevision } from "@/db/queries/fits";
+import { getWorkspaceBySlug } from "@/db/queries/workspaces";
+import { parameterSetSchema } from "@/lib/export";
+import { compileModel, computeBands, templateKPath } from "@/lib/tb";
+import { listMail } from "@/tests/support/mail";
+import { type Team, createTeam } from "@/tests/support/workspace";
+import { rebuiltBands } from "@/tests/unit/export/rebuild";
+import { type RevisionBody, honeycombDataset, honeycombTruth, isFinal, longFit, siliconDataset, waitForRevision } from "./helpers";
+
+// Fit runs through the routes alone, against the real PostgreSQL, pg-boss and the harness's worker (issue 5).
+
+let team: Team;
+let datasetId: string;
+let fitId: string;
+const base = () => `/api/workspaces/${team.slug}`;
+
+beforeAll(async () => {
+  team = await createTeam("Halvorsen Quantum Materials Lab");
+  datasetId = await honeycombDataset(team.slug);
+  const launched = await team.editor.post(`${base()}/fits`, {
+    datasetId,
+    name: "graphene pz",
+    model: { template: "honeycomb-pz" },
+    mapping: { kind: "offset", dataBands: [1, 2] },
+    options: { notifyByEmail: true },
+  });
+  expect(launched.status, JSON.stringify(launched.body)).toBe(201);
+  const body = launched.body as { fitId: string; revision: number; warnings: unknown[] };
+  expect(body.revision).toBe(1);
+  fitId = body.fitId;
+});
+
+describe("a fit on a fixture dataset", () => {
+  let done: RevisionBody;
+  it("succeeds and recovers the parameters the data were generated with", async () => {
+    done = await waitForRevision(team.viewer, `${base()}/fits/${fitId}/revisions/1`, isFinal);
+    expect(done.status).toBe("succeeded");
+    expect(done.attempts).toBe(1);
+    // exact synthetic data (helpers.honeycombDataset): the fit should land on the generating values
+    for (const [name, value] of Object.entries(honeycombTruth))
+      expect(done.result?.parameters.find((p) => p.name === name)?.value).toBeCloseTo(value, 5);
+    expect(done.result?.rms).toBeLessThan(1e-6);
+  });
+
+  it("stores one residual row per point used, paged and sorted in the database", async () => {
+    const total = done.result?.pointsUsed ?? 0;
+    expect(total).toBe(120); // 60 k-points × 2 bands
+    const workspace = await getWorkspaceBySlug(team.slug);
+    const revision = await getRevision({ workspaceId: workspace!.id, fitId, number: 1 });
+    expect(await countResiduals({ revisionId: revision!.revision.id })).toBe(total);
+    const page = await team.viewer.get(`${base()}/fits/${fitId}/revisions/1/residuals?band=2&page=2&pageSize=10&sort=-absResidual`);
+    expect(page.status).toBe(200);
+    const body = page.body as { rows: { dataBand: number; residual: number }[]; total: number };
+    expect(body.total).toBe(60);
+    expect(body.rows).toHaveLength(10);
+    expect(body.rows.every((r) => r.dataBand === 2)).toBe(true);
+    const abs = body.rows.map((r) => Math.abs(r.residual));
+    expect(abs).toEqual([...abs].sort((a, b) => b - a));
+    const bad = await team.viewer.get(`${base()}/fits/${fitId}/revisions/1/residuals?sort=sideways`);
+    expect(bad.status).toBe(422);
+  });
+
+  it("lists the fit and its revisions", async () => {
+    const list = await team.viewer.get(`${base()}/fits`);
+    expect((list.body as { fits: { id: string; latestStatus: string }[] }).fits.find((f) => f.id === fitId)?.latestStatus).toBe("succeeded");
+    const one = await team.viewer.get(`${base()}/fits/${fitId}`);
+    expect((one.body as { fit: { revisions: { number: number }[] } }).fit.revisions.map((r) => r.number)).toEqual([1]);
+  });
+
+  it("exports a parameter set that validates and whose hopping list alone rebuilds the fitted bands to 1e-9 eV", async () => {
+    const exported = await team.viewer.get(`${base()}/fits/${fitId}/revisions/1/export`);
+    expect(exported.status).toBe(200);
+    const set = parameterSetSchema.parse(exported.body);
+    expect(set.provenance.dataset.sha256).toMatch(/^[0-9a-f]{64}$/);
+    expect(set.provenance.revision).toBe(1);
+    const fitted = compileModel(done.result!.fittedModel);
+    const k = templateKPath(done.result!.fittedModel, { totalPoints: 25 }).k;
+    const { energies } = computeBands(fitted, undefined, k);
+    k.forEach((kk, i) => rebuiltBands(set, kk).forEach((e, b) => expect(Math.abs(e - energies[i * 2 + b])).toBeLessThan(1e-9)));
+  });
+
+  it("serves the residuals and the model bands as CSV", async () => {
+    const residuals = await team.viewer.get(`${base()}/fits/${fitId}/revisions/1/residuals.csv`);
+    expect(residuals.headers.get("content-type")).toContain("text/csv");
+    expect(String(residuals.body).trim().split("\n")).toHaveLength(121);
+    const bands = await team.viewer.get(`${base()}/fits/${fitId}/revisions/1/bands.csv`);
+    const lines = String(bands.body).trim().split("\n");
+    expect(lines.filter((l) => l.startsWith("data,"))).toHaveLength(120);
+    expect(lines.some((l) => l.startsWith("path,"))).toBe(true);
+  });
+
+  it("tells the launcher by e-mail, with a link to the revision page", async () => {
+    const to = await emailOf("editor");
+    const deadline = Date.now() + 10_000;
+    let found: { text: string } | undefined;
+    while (!found && Date.now() < deadline) {
+      found = (await listMail()).find((m) => m.to.includes(to) && m.subject.startsWith('Fit "graphene pz" revision 1'));
+      if (!found) await new Promise((resolve) => setTimeout(resolve, 250));
+    }
+    expect(found?.text).toContain(`/w/${team.slug}/fits/${fitId}/revisions/1`);
+  });
+
+  it("starts revision 2 from revision 1's fitted values", async () => {
+    const next = await team.editor.post(`${base()}/fits/${fitId}/revisions`, { from: 1, parameters: { "E_p[C]": { free: false } } });
+    expect(next.status, JSON.stringify(next.body)).toBe(201);
+    expect((next.body as { revision: number }).revision).toBe(2);
+    const second = await waitForRevision(team.viewer, `${base()}/fits/${fitId}/revisions/2`, isFinal);
+    expect(second.status).toBe("succeeded");
+    const inputs = (await team.viewer.get(`${base()}/fits/${fitId}/revisions/2`)).body as {
+      parentNumber: number;
+      inputs: { model: { parameters: { name: string; value: number; free: boolean }[] } };
+    };
+    expect(inputs.parentNumber).toBe(1);
+    const ep = inputs.inputs.model.parameters.find((p) => p.name === "E_p[C]");
+    expect(ep?.free).toBe(false);
+    expect(ep?.value).toBeCloseTo(honeycombTruth["E_p[C]"], 5);
+  });
+});
+
+describe("cancellation", () => {
+  it("stops a running fit within about a second and keeps its best point", async () => {
+    const silicon = await siliconDataset(team.slug);
+    const launched = await team.editor.post(`${base()}/fits`, longFit(silicon, 30_000));
+    expect(launched.status, JSON.stringify(launched.body)).toBe(201);
+    const path = `${base()}/fits/${(launched.body as { fitId: string }).fitId}/revisions/1`;
+    await waitForRevision(team.viewer, path, (b) => b.status === "running" && b.progress !== null, 20_000);
+    const viewerCancel = await team.viewer.post(`${path}/cancel`);
+    expect(viewerCancel.status).toBe(403);
+    const asked = Date.now();
+    const cancel = await team.editor.post(`${path}/cancel`);
+    expect(cancel.status).toBe(200);
+    const ended = await waitForRevision(team.viewer, path, isFinal, 10_000);
+    // 1 s for the fit to notice (250 ms polling + one iteration) plus the result write and our 200 ms polling
+    expect(Date.now() - asked).toBeLessThan(3000);
+    expect(ended.status).toBe("cancelled");
+    expect(ended.result?.cancelled).toBe(true);
+    expect(ended.result?.parameters.length).toBeGreaterThan(0);
+  });
+});
+
+async function emailOf(role: "editor"): Promise<string> {
+  const me = await team[role].get("/api/auth/get-session");
+  return (me.body as { user: { email: string } }).user.email;
+}
