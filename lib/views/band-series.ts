@@ -166,3 +166,19 @@ export function chartResiduals(
   }
   return result;
 }
+
+/**
+ * Model band energies (eV, ascending, offset and renormalisation applied) at each distinct k-point of the
+ * data, by k-point index — what {@link chartResiduals} compares with.
+ * @param points - dataset points with `kIndex` and Cartesian `k` (1/Å)
+ */
+export function modelEnergiesByKIndex(model: ModelDocument, points: readonly { kIndex: number; k: Vec3 }[], transform: EnergyTransform = IDENTITY_TRANSFORM): Map<number, number[]> {
+  const byIndex = new Map<number, Vec3>();
+  for (const p of points) if (!byIndex.has(p.kIndex)) byIndex.set(p.kIndex, p.k);
+  const indices = [...byIndex.keys()];
+  const compiled = compileModel(model);
+  const n = compiled.orbitalCount;
+  const { energies } = computeBands(compiled, undefined, indices.map((i) => byIndex.get(i)!));
+  const { offset, renormalisation, reference } = transform;
+  return new Map(indices.map((index, i) => [index, Array.from(energies.subarray(i * n, (i + 1) * n), (e) => reference + (e - reference) / renormalisation + offset)]));
+}

@@ -13,6 +13,7 @@ export {
   distinctKPoints,
   energyDomain,
   modelBandLines,
+  modelEnergiesByKIndex,
   type ChartResidual,
   chartResiduals,
   revisionTransform,

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { buildTemplate } from "@/lib/tb";
-import { chartResiduals, dataSeriesByBand, distinctKPoints, energyDomain, modelBandLines, revisionTransform } from "@/lib/views/band-series";
+import { chartResiduals, dataSeriesByBand, distinctKPoints, energyDomain, modelBandLines, modelEnergiesByKIndex, revisionTransform } from "@/lib/views/band-series";
 
 describe("dataSeriesByBand", () => {
   it("groups points by band and sorts each along the path", () => {
@@ -87,5 +87,16 @@ describe("chartResiduals and revisionTransform", () => {
   it("takes δ and Z from fitted parameters when present, else from the options", () => {
     const options = { energyOffset: { value: 0.2 }, renormalisation: { value: 1.5, reference: -0.1 } };
     expect(revisionTransform([{ name: "energy offset", value: 0.05 }], options)).toEqual({ offset: 0.05, renormalisation: 1.5, reference: -0.1 });
+  });
+});
+
+describe("modelEnergiesByKIndex", () => {
+  it("gives the chain's closed form at each k index", () => {
+    // E(k) = E_s − 2t cos(ka), the chain-s template's convention (Ashcroft & Mermin, ch. 10).
+    const chain = buildTemplate("chain-s");
+    const a = chain.lattice[0][0];
+    const t = chain.parameters.find((p) => p.name === "t")!.value;
+    const map = modelEnergiesByKIndex(chain, [{ kIndex: 7, k: [Math.PI / a, 0, 0] }]);
+    expect(map.get(7)![0]).toBeCloseTo(2 * t, 9);
   });
 });
