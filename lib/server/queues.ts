@@ -45,10 +45,28 @@ export function fitJobExpirySeconds(timeLimitMs: number, marginSeconds: number):
   return Math.min(86_400, Math.ceil((timeLimitMs / 1000) * 1.25 + marginSeconds));
 }
 
-/** Every queue the app uses; createQueue is idempotent, so both app and worker call this on start. */
+/** PostgreSQL's deadlock_detected: two processes creating the same queue's tables at once (seen at start-up). */
+const deadlockDetected = "40P01";
+
+async function createQueueRetrying(boss: PgBoss, queue: PgBoss.Queue): Promise<void> {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      await boss.createQueue(queue.name, queue);
+      return;
+    } catch (error) {
+      if (attempt >= 5 || (error as { code?: string }).code !== deadlockDetected) throw error;
+      await new Promise((resolve) => setTimeout(resolve, 100 * attempt));
+    }
+  }
+}
+
+/**
+ * Every queue the app uses; createQueue is idempotent, so the app and every worker call this on start
+ * (concurrent calls can deadlock in PostgreSQL, so a deadlock is retried).
+ */
 export async function createQueues(boss: PgBoss): Promise<void> {
-  await boss.createQueue(healthQueue.name, healthQueue.options);
+  await createQueueRetrying(boss, healthQueue.options);
   // The dead-letter queue first: the fit queue's row refers to it.
-  await boss.createQueue(fitDeadLetterQueue.name, fitDeadLetterQueue.options);
-  await boss.createQueue(fitQueue.name, fitQueue.options);
+  await createQueueRetrying(boss, fitDeadLetterQueue.options);
+  await createQueueRetrying(boss, fitQueue.options);
 }
