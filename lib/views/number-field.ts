@@ -20,7 +20,8 @@ export function readNumber(text: string): NumberReading {
 export class FieldErrors {
   readonly byField: Record<string, string[]> = {};
   add(field: string, message: string): void {
-    (this.byField[field] ??= []).includes(message) || this.byField[field].push(message);
+    const messages = (this.byField[field] ??= []);
+    if (!messages.includes(message)) messages.push(message);
   }
   get empty(): boolean {
     return Object.keys(this.byField).length === 0;

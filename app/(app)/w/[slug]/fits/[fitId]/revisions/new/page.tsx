@@ -1,0 +1,21 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { NewRevisionForm } from "@/components/fits/new-revision-form";
+import { PageHeader } from "@/components/ui";
+import { requireWorkspaceMember } from "@/lib/server/workspace-access";
+
+export const dynamic = "force-dynamic";
+export const metadata: Metadata = { title: "New revision" };
+
+export default async function NewRevisionPage({ params, searchParams }: { params: Promise<{ slug: string; fitId: string }>; searchParams: Promise<{ from?: string }> }) {
+  const { slug, fitId } = await params;
+  const from = Number((await searchParams).from);
+  const { workspace } = await requireWorkspaceMember(slug, "editor");
+  if (!Number.isInteger(from) || from < 1) notFound();
+  return (
+    <>
+      <PageHeader title={`New revision from revision ${from}`} description="Free or fix parameters, change the window or the weights, and launch again." />
+      <NewRevisionForm slug={workspace.slug} fitId={fitId} from={from} />
+    </>
+  );
+}

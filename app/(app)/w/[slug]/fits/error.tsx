@@ -1,0 +1,7 @@
+"use client";
+
+import { ErrorPanel } from "@/components/shell/error-panel";
+
+export default function FitsError({ error, reset }: { error: Error & { digest?: string }; reset: () => void }) {
+  return <ErrorPanel error={error} reset={reset} />;
+}
