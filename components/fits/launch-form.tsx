@@ -156,7 +156,7 @@ export function LaunchForm({ slug, mode }: LaunchFormProps) {
     launch.mutate(result);
   };
 
-  const templateOptions = (templates.data?.templates ?? []).map((t) => ({ value: t.id, label: `${t.title} (${t.orbitalCount} orbital${t.orbitalCount === 1 ? "" : "s"})` }));
+  const templateOptions = (templates.data?.templates ?? []).map((t) => ({ value: t.id, label: `${t.title} (${t.orbitals} orbital${t.orbitals === 1 ? "" : "s"})` }));
   const errorCount = Object.keys(errors).length;
 
   return (

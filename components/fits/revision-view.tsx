@@ -30,7 +30,7 @@ function InputsSummary({ revision }: { revision: RevisionDetails }) {
       ? "each point to the nearest model band"
       : `data bands ${inputs.mapping.dataBands ? inputs.mapping.dataBands.join("–") : "(all)"} → model bands from ${inputs.mapping.firstModelBand}`;
   const rows: [string, string][] = [
-    ["Launched by", revision.launchedBy?.name ?? "a former member"],
+    ["Launched by", revision.launchedBy ?? "a former member"],
     ["Launched", formatDateTime(new Date(revision.createdAt))],
     ["Finished", revision.finishedAt ? formatDateTime(new Date(revision.finishedAt)) : "—"],
     ["Dataset", `${inputs.dataset.name} (SHA-256 ${inputs.dataset.sha256.slice(0, 12)}…)`],
@@ -70,6 +70,7 @@ export function RevisionView({ slug, fitId, number, canEdit }: { slug: string; f
     <div className="flex flex-col gap-6">
       <div className="flex flex-wrap items-center gap-3">
         <p className="text-sm">
+          <span className="font-medium">{r.fitName}</span> ·{" "}
           Status: <strong data-testid="revision-status">{statusText[r.status]}</strong>
           {result ? (
             <span className="tabular-nums">
@@ -92,9 +93,13 @@ export function RevisionView({ slug, fitId, number, canEdit }: { slug: string; f
       {running ? <ProgressPanel slug={slug} fitId={fitId} revision={r} canCancel={canEdit} /> : null}
       {r.status === "failed" ? <Notice tone="error" title="The fit failed">{r.failureReason ?? "No reason was recorded."}</Notice> : null}
       {r.status === "cancelled" ? <Notice tone="warning" title="Cancelled">The fit was stopped; the results below are its best point so far.</Notice> : null}
-      {r.warnings?.length ? (
+      {r.launchWarnings.length ? (
         <Notice tone="warning" title="Checks before the fit">
-          <ul className="list-disc pl-4">{r.warnings.map((w) => <li key={w}>{w}</li>)}</ul>
+          <ul className="list-disc pl-4">
+            {r.launchWarnings.map((w, i) => (
+              <li key={i}>{w.message}</li>
+            ))}
+          </ul>
         </Notice>
       ) : null}
 

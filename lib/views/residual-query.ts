@@ -8,7 +8,7 @@ export type ResidualSortColumn = (typeof residualSortColumns)[number];
 export const residualQuerySchema = z.object({
   band: z.int().min(1).optional(),
   page: z.int().min(1).default(1),
-  pageSize: z.int().min(1).max(500).default(25),
+  pageSize: z.int().min(1).max(1000).default(25),
   sort: z.enum(residualSortColumns).default("pointIndex"),
   descending: z.boolean().default(false),
 });

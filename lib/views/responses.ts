@@ -67,9 +67,12 @@ export const revisionDetailsSchema = z.looseObject({
   progress: revisionProgressSchema.nullable(),
   result: revisionResultSchema.nullable(),
   inputs: revisionSnapshotSchema,
+  fitName: z.string(),
   failureReason: z.string().nullable(),
-  warnings: z.array(z.string()).optional(),
-  launchedBy: z.looseObject({ name: z.string().nullable() }).nullable().optional(),
+  /** the checks before queueing (the frame check) */
+  launchWarnings: z.array(z.looseObject({ kind: z.string(), message: z.string() })),
+  /** the launcher's name; null when the account is gone */
+  launchedBy: z.string().nullable(),
   createdAt: timestamp,
   startedAt: timestamp.nullable(),
   finishedAt: timestamp.nullable(),
@@ -93,7 +96,8 @@ export type ResidualPage = z.infer<typeof residualPageSchema>;
 export const templateSummarySchema = z.looseObject({
   id: z.string(),
   title: z.string(),
-  orbitalCount: z.int(),
+  /** number of orbitals (model bands) */
+  orbitals: z.int(),
   parameters: z.array(modelParameterSchema),
   latticeConstant: z.looseObject({ value: z.number(), meaning: z.string() }),
 });
