@@ -1,4 +1,5 @@
 import type { ComplexMatrix } from "./complex-matrix";
+import { createTridiagonalWork, hypot2, implicitQL, sortAscending } from "./tridiagonal-ql";
 
 /**
  * Eigenvalues (ascending) and, when requested, orthonormal eigenvectors of a Hermitian matrix.
@@ -16,18 +17,11 @@ export interface HermitianEigenSolver {
   /**
    * Diagonalises the Hermitian matrix given by `re` and `im` (row-major; only the lower triangle and the
    * diagonal are read, so the upper triangle may hold anything; the input is not modified). Writes ascending eigenvalues into `out.values` and, if `withVectors`,
-   * orthonormal eigenvectors into `out.vectorsRe` / `out.vectorsIm`.
+   * orthonormal eigenvectors into `out.vectorsRe` / `out.vectorsIm`: all of them, or only those of
+   * bands `vectorBands` = [first, last] (0-based, inclusive, in ascending order; the others are left as
+   * they were).
    */
-  solve(re: Float64Array, im: Float64Array, out: EigenOutput, withVectors: boolean): void;
-}
-
-const MAX_QL_ITERATIONS = 60;
-
-// √(a² + b²) without Math.hypot's cost (variadic, it was the QL loop's largest single expense); falls
-// back to Math.hypot only where a² + b² would overflow or lose precision to underflow.
-function hypot2(a: number, b: number): number {
-  const sum = a * a + b * b;
-  return sum < 1e300 && sum > 1e-300 ? Math.sqrt(sum) : Math.hypot(a, b);
+  solve(re: Float64Array, im: Float64Array, out: EigenOutput, withVectors: boolean, vectorBands?: readonly [number, number]): void;
 }
 
 /** Allocates output arrays matching a solver of the given size. */
@@ -55,12 +49,10 @@ export function createHermitianEigenSolver(size: number): HermitianEigenSolver {
   const tau = new Float64Array(n);
   const pRe = new Float64Array(n);
   const pIm = new Float64Array(n);
-  const diag = new Float64Array(n);
-  const off = new Float64Array(n);
+  const work = createTridiagonalWork(n);
+  const { diag, off, z, order } = work;
   const phaseRe = new Float64Array(n);
   const phaseIm = new Float64Array(n);
-  const z = new Float64Array(n * n); // row m: eigenvector m of the tridiagonal matrix
-  const order = new Int32Array(n);
 
   function tridiagonalise(): void {
     for (let k = 0; k < n - 2; k++) {
@@ -161,82 +153,10 @@ export function createHermitianEigenSolver(size: number): HermitianEigenSolver {
     off[n - 1] = 0;
   }
 
-  function implicitQL(withVectors: boolean): void {
-    if (withVectors) {
-      z.fill(0);
-      for (let i = 0; i < n; i++) z[i * n + i] = 1;
-    }
-    for (let l = 0; l < n; l++) {
-      let iterations = 0;
-      let m: number;
-      do {
-        for (m = l; m < n - 1; m++) {
-          const dd = Math.abs(diag[m]) + Math.abs(diag[m + 1]);
-          if (Math.abs(off[m]) <= Number.EPSILON * dd) break;
-        }
-        if (m !== l) {
-          if (iterations++ === MAX_QL_ITERATIONS) throw new Error("Hermitian eigen-solver did not converge");
-          let g = (diag[l + 1] - diag[l]) / (2 * off[l]);
-          let r = hypot2(g, 1);
-          g = diag[m] - diag[l] + off[l] / (g + (g >= 0 ? Math.abs(r) : -Math.abs(r)));
-          let s = 1;
-          let c = 1;
-          let p = 0;
-          let i: number;
-          for (i = m - 1; i >= l; i--) {
-            let f = s * off[i];
-            const b = c * off[i];
-            r = hypot2(f, g);
-            off[i + 1] = r;
-            if (r === 0) {
-              diag[i + 1] -= p;
-              off[m] = 0;
-              break;
-            }
-            s = f / r;
-            c = g / r;
-            g = diag[i + 1] - p;
-            r = (diag[i] - g) * s + 2 * c * b;
-            p = s * r;
-            diag[i + 1] = g + p;
-            g = c * r - b;
-            if (withVectors) {
-              const ri = i * n;
-              const rn = ri + n;
-              for (let k = 0; k < n; k++) {
-                f = z[rn + k];
-                z[rn + k] = s * z[ri + k] + c * f;
-                z[ri + k] = c * z[ri + k] - s * f;
-              }
-            }
-          }
-          if (r === 0 && i >= l) continue;
-          diag[l] -= p;
-          off[l] = g;
-          off[m] = 0;
-        }
-      } while (m !== l);
-    }
-  }
-
-  function sortAscending(): void {
-    for (let i = 0; i < n; i++) order[i] = i;
-    for (let i = 1; i < n; i++) {
-      const idx = order[i];
-      const value = diag[idx];
-      let j = i - 1;
-      while (j >= 0 && diag[order[j]] > value) {
-        order[j + 1] = order[j];
-        j--;
-      }
-      order[j + 1] = idx;
-    }
-  }
-
-  function backTransform(out: EigenOutput): void {
+  function backTransform(out: EigenOutput, first: number, last: number): void {
     const yr = out.vectorsRe;
     const yi = out.vectorsIm;
-    for (let m = 0; m < n; m++) {
+    for (let m = first; m <= last; m++) {
       const src = order[m] * n;
       const dst = m * n;
       for (let j = 0; j < n; j++) {
@@ -270,14 +190,14 @@ export function createHermitianEigenSolver(size: number): HermitianEigenSolver {
 
   return {
     size,
-    solve(re, im, out, withVectors) {
+    solve(re, im, out, withVectors, vectorBands) {
       aRe.set(re);
       aIm.set(im);
       tridiagonalise();
-      implicitQL(withVectors);
-      sortAscending();
+      implicitQL(work, withVectors);
+      sortAscending(work);
       for (let m = 0; m < n; m++) out.values[m] = diag[order[m]];
-      if (withVectors) backTransform(out);
+      if (withVectors) backTransform(out, vectorBands ? vectorBands[0] : 0, vectorBands ? vectorBands[1] : n - 1);
     },
   };
 }

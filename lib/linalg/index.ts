@@ -6,5 +6,6 @@ export {
   createHermitianEigenSolver,
   eigenHermitian,
 } from "./hermitian-eigen";
+export { type SymmetricEigenSolver, createSymmetricEigenSolver } from "./symmetric-eigen";
 export { type GeneralisedEigenSolver, createGeneralisedEigenSolver } from "./generalised-eigen";
 export { createSeededRandom } from "./seeded-random";

@@ -41,6 +41,8 @@ export class BandResidualModel {
   private readonly values: Float64Array;
   private readonly jacobian: Float64Array;
   private readonly candidates: [number, number];
+  /** Model bands any point can be compared with (0-based, inclusive): the only ones needing gradients. */
+  private readonly usedBands: [number, number];
 
   constructor(
     private readonly hamiltonian: PreparedHamiltonian,
@@ -58,6 +60,7 @@ export class BandResidualModel {
     this.jacobian = new Float64Array(points.length * (this.modelParameterCount + 2));
     const range = mapping.kind === "nearest" ? (mapping.modelBands ?? [1, this.bandCount]) : [1, this.bandCount];
     this.candidates = [range[0] - 1, range[1] - 1];
+    this.usedBands = usedBandRange(points, this.candidates);
   }
 
   /** The problem for the least-squares engine. */
@@ -104,6 +107,7 @@ export class BandResidualModel {
       gradients: withGradients,
       energiesInto: this.energies,
       gradientsInto: withGradients ? this.gradients : undefined,
+      gradientBands: this.usedBands,
     });
   }
 
@@ -131,4 +135,16 @@ export class BandResidualModel {
       values[i] = reference + (energies[base + band] - reference) / z + delta;
     });
   }
+}
+
+/** The lowest and highest model band (0-based) any point is compared with; nearest-mapped points may use every candidate. */
+function usedBandRange(points: readonly KeptPoint[], candidates: [number, number]): [number, number] {
+  let low = Infinity;
+  let high = -Infinity;
+  for (const { modelBand } of points) {
+    const [from, to] = modelBand < 0 ? candidates : [modelBand, modelBand];
+    low = Math.min(low, from);
+    high = Math.max(high, to);
+  }
+  return [low, high];
 }

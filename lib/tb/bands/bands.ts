@@ -2,12 +2,15 @@ import {
   type EigenOutput,
   type GeneralisedEigenSolver,
   type HermitianEigenSolver,
+  type SymmetricEigenSolver,
   createEigenOutput,
   createGeneralisedEigenSolver,
   createHermitianEigenSolver,
+  createSymmetricEigenSolver,
 } from "../../linalg";
 import type { Vec3 } from "../geometry/vec3";
 import { type PreparedHamiltonian, type PreparedMatrix, assembleMatrix, checkParameterVector, prepareHamiltonian } from "../hamiltonian/prepare";
+import { type RealGauge, realGaugeOf } from "../hamiltonian/real-gauge";
 import type { CompiledModel } from "../model/compile";
 
 /** Options of {@link bandsWithGradients}. */
@@ -18,6 +21,12 @@ export interface BandGradientOptions {
   energiesInto?: Float64Array;
   /** write gradients here instead of allocating (length nk × nb × np) */
   gradientsInto?: Float64Array;
+  /**
+   * only the gradients of bands [first, last] (0-based, inclusive, counted from the lowest band at each
+   * k) are computed, the others are 0; default every band. A fit that compares data with some of the
+   * bands needs only theirs, and skips their eigenvectors too.
+   */
+  gradientBands?: readonly [number, number];
 }
 
 export interface BandsWithGradients {
@@ -35,6 +44,8 @@ interface Workspace {
   eigen: EigenOutput;
   standard: HermitianEigenSolver;
   generalised: GeneralisedEigenSolver;
+  /** set when H(k) has a real gauge (see real-gauge.ts): H is then diagonalised as a real matrix */
+  real: { gauge: RealGauge; solver: SymmetricEigenSolver; matrix: Float64Array; vectors: Float64Array } | null;
 }
 
 const workspaces = new WeakMap<PreparedHamiltonian, Workspace>();
@@ -51,20 +62,68 @@ function workspaceFor(prepared: PreparedHamiltonian): Workspace {
       eigen: createEigenOutput(n),
       standard: createHermitianEigenSolver(n),
       generalised: createGeneralisedEigenSolver(n),
+      real: realWorkspace(prepared),
     };
     workspaces.set(prepared, w);
   }
   return w;
 }
 
-/** Assembles and diagonalises at one k-point into the workspace. */
-function solveAt(prepared: PreparedHamiltonian, w: Workspace, kIndex: number, theta: Float64Array, withVectors: boolean) {
+function realWorkspace(prepared: PreparedHamiltonian): Workspace["real"] {
+  const gauge = prepared.overlap ? null : realGaugeOf(prepared.compiled);
+  const n = prepared.orbitalCount;
+  return gauge
+    ? { gauge, solver: createSymmetricEigenSolver(n), matrix: new Float64Array(n * n), vectors: new Float64Array(n * n) }
+    : null;
+}
+
+/**
+ * Assembles and diagonalises at one k-point into the workspace; eigenvectors (when asked for) of bands
+ * `vectorBands` only.
+ */
+function solveAt(
+  prepared: PreparedHamiltonian,
+  w: Workspace,
+  kIndex: number,
+  theta: Float64Array,
+  withVectors: boolean,
+  vectorBands: readonly [number, number],
+) {
   const n = prepared.orbitalCount;
   assembleMatrix(prepared.hamiltonian, kIndex, theta, w.hRe, w.hIm, false, n);
   if (prepared.overlap) {
     assembleMatrix(prepared.overlap, kIndex, theta, w.sRe, w.sIm, true, n);
     w.generalised.solve(w.hRe, w.hIm, w.sRe, w.sIm, w.eigen, withVectors);
-  } else w.standard.solve(w.hRe, w.hIm, w.eigen, withVectors);
+  } else if (w.real) solveInRealGauge(w, w.real, n, withVectors, vectorBands);
+  else w.standard.solve(w.hRe, w.hIm, w.eigen, withVectors, vectorBands);
+}
+
+/**
+ * Diagonalises H̃ = U†HU = Re H + (Im H·P − P·Im H)/2 (real, lower triangle) and maps its eigenvectors φ
+ * back: ψ = Uφ, ψ_j = ((1 + i)φ_j + (1 − i)π_j φ_P(j))/2.
+ */
+function solveInRealGauge(w: Workspace, real: NonNullable<Workspace["real"]>, n: number, withVectors: boolean, vectorBands: readonly [number, number]) {
+  const { partner, parity } = real.gauge;
+  const { hRe, hIm } = w;
+  const a = real.matrix;
+  for (let i = 0; i < n; i++) {
+    const pi = partner[i] * n;
+    for (let j = 0; j <= i; j++)
+      a[i * n + j] = hRe[i * n + j] + 0.5 * (hIm[i * n + partner[j]] * parity[j] - parity[i] * hIm[pi + j]);
+  }
+  real.solver.solve(a, w.eigen.values, withVectors ? real.vectors : null, vectorBands);
+  if (!withVectors) return;
+  const phi = real.vectors;
+  const yr = w.eigen.vectorsRe;
+  const yi = w.eigen.vectorsIm;
+  for (let m = vectorBands[0]; m <= vectorBands[1]; m++) {
+    const row = m * n;
+    for (let j = 0; j < n; j++) {
+      const image = parity[j] * phi[row + partner[j]];
+      yr[row + j] = 0.5 * (phi[row + j] + image);
+      yi[row + j] = 0.5 * (phi[row + j] - image);
+    }
+  }
 }
 
 /** Adds scale × Re⟨ψ_n|∂M/∂θ_p|ψ_n⟩ into `gradients` for every band n and parameter p. */
@@ -77,13 +136,14 @@ function accumulateExpectation(
   gradients: Float64Array,
   offset: number,
   energyWeighted: boolean,
+  bands: readonly [number, number],
 ) {
   const { entry, parameter, coefficients, slotCount, upperSlots } = matrix;
   const base = kIndex * slotCount * 2;
   const vr = eigen.vectorsRe;
   const vi = eigen.vectorsIm;
   const count = upperSlots.length;
-  for (let band = 0; band < n; band++) {
+  for (let band = bands[0]; band <= bands[1]; band++) {
     const vb = band * n;
     const scale = energyWeighted ? -eigen.values[band] : 1;
     const out = offset + band * np;
@@ -128,14 +188,17 @@ export function bandsWithGradients(
     if (gradients.length !== nk * n * np) throw new RangeError(`gradientsInto must have length ${nk * n * np}`);
     gradients.fill(0);
   }
+  const bands = options.gradientBands ?? [0, n - 1];
+  if (!(Number.isInteger(bands[0]) && Number.isInteger(bands[1]) && bands[0] >= 0 && bands[0] <= bands[1] && bands[1] < n))
+    throw new RangeError(`gradientBands must be 0-based [first, last] within 0…${n - 1}, got [${bands.join(", ")}]`);
   const w = workspaceFor(prepared);
   for (let k = 0; k < nk; k++) {
-    solveAt(prepared, w, k, theta, wantGradients);
+    solveAt(prepared, w, k, theta, wantGradients, bands);
     energies.set(w.eigen.values, k * n);
     if (!gradients) continue;
     const offset = k * n * np;
-    accumulateExpectation(prepared.hamiltonian, k, w.eigen, n, np, gradients, offset, false);
-    if (prepared.overlap) accumulateExpectation(prepared.overlap, k, w.eigen, n, np, gradients, offset, true);
+    accumulateExpectation(prepared.hamiltonian, k, w.eigen, n, np, gradients, offset, false, bands);
+    if (prepared.overlap) accumulateExpectation(prepared.overlap, k, w.eigen, n, np, gradients, offset, true, bands);
   }
   return { energies, gradients };
 }
@@ -180,8 +243,9 @@ export function computeBands(
   const im = options.eigenvectors ? new Float64Array(nk * n * n) : undefined;
   const weights = options.orbitalWeights ? new Float64Array(nk * n * n) : undefined;
   const w = workspaceFor(prepared);
+  const allBands: [number, number] = [0, n - 1];
   for (let k = 0; k < nk; k++) {
-    solveAt(prepared, w, k, values, withVectors);
+    solveAt(prepared, w, k, values, withVectors, allBands);
     energies.set(w.eigen.values, k * n);
     re?.set(w.eigen.vectorsRe, k * n * n);
     im?.set(w.eigen.vectorsIm, k * n * n);
