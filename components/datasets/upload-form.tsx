@@ -163,7 +163,7 @@ export function UploadForm({ slug, maxBytes, maxBytesLabel }: { slug: string; ma
                           id={`role-${i}`}
                           value={draft.roles[i]}
                           onChange={(e) => setRole(i, e.target.value as FormColumnRole)}
-                          className="mt-1 h-7 rounded-md border border-line-strong bg-surface px-1 text-sm"
+                          className="mt-1 h-7 rounded-md border border-line-strong bg-surface px-1 text-sm font-normal"
                         >
                           {formColumnRoles.map((r) => (
                             <option key={r.value} value={r.value}>

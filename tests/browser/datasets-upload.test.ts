@@ -76,11 +76,16 @@ describe("dataset upload in the browser", () => {
     expect(await page.locator("tbody tr").count()).toBe(50);
     await screenshot(page, "ds-03-dataset-page");
 
+    // A first click on a numeric column sorts descending (TanStack Table's default for numbers).
     await page.getByRole("button", { name: "Energy" }).click();
-    await page.waitForURL(/sort=energy/);
+    await page.waitForURL(/sort=-energy/);
     await page.getByLabel("Band", { exact: true }).selectOption("2");
     await page.waitForURL(/band=2/);
-    await page.getByRole("columnheader", { name: /Energy/ }).and(page.locator('[aria-sort="ascending"]')).waitFor();
+    await page.getByRole("columnheader", { name: /Energy/ }).and(page.locator('[aria-sort="descending"]')).waitFor();
+    const energies = await page.locator("tbody tr td:nth-child(6)").allTextContents();
+    const values = energies.map((e) => Number(e.replace("\u2212", "-").replace(" eV", "")));
+    expect(values).toEqual([...values].sort((a, b) => b - a));
+    expect(await page.locator("tbody tr td:nth-child(3)").allTextContents()).toEqual(values.map(() => "2"));
     await screenshot(page, "ds-04-points-sorted-band-2");
   });
 
