@@ -1,3 +1,4 @@
 export * from "./least-squares";
-export * from "./random";
+// The seeded generator lives with the linear algebra; fits and their callers get it from here too.
+export { type RandomSource, createRandom } from "../linalg/seeded-random";
 export * from "./bands";

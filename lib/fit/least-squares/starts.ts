@@ -1,4 +1,4 @@
-import { createRandom } from "../random";
+import { createRandom } from "../../linalg/seeded-random";
 
 /** Where the starts may be drawn. */
 export interface StartRegion {

@@ -1,5 +1,5 @@
 // Synthetic band data for the band-fit tests and the benchmark: bands of a model at known parameters,
-// with seeded Gaussian noise (lib/fit/random.ts), and starts perturbed from the truth.
+// with seeded Gaussian noise (lib/linalg/seeded-random.ts), and starts perturbed from the truth.
 import { createRandom } from "@/lib/fit";
 import type { BandFitPoint } from "@/lib/fit";
 import { type ModelDocument, type Vec3, compileModel, computeBands, templateKPath } from "@/lib/tb";

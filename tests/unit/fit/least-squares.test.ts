@@ -9,7 +9,7 @@ import {
 import { ResidualEvaluator } from "@/lib/fit/least-squares/evaluator";
 import { normaliseLeastSquaresOptions } from "@/lib/fit/least-squares/options";
 import { prepareProblem } from "@/lib/fit/least-squares/problem";
-import { createRandom } from "@/lib/fit/random";
+import { createRandom } from "@/lib/linalg";
 import { mgh09, misra1a, nistProblem, thurber } from "./nist-strd";
 
 /** Every number anywhere in the result is finite (no NaN, no ±Infinity). */

@@ -6,7 +6,7 @@ import {
   createEigenOutput,
   createGeneralisedEigenSolver,
   createHermitianEigenSolver,
-  createSeededRandom,
+  createRandom,
   eigenHermitian,
 } from "@/lib/linalg";
 
@@ -108,7 +108,7 @@ describe("Hermitian eigen-solver", () => {
   it.each([1, 2, 3, 4, 5, 7, 8, 10, 13, 18, 25, 32, 40])(
     "agrees with mathjs eigs on a seeded random Hermitian matrix of size %i",
     (n) => {
-      const h = randomHermitian(n, createSeededRandom(20261201 + n));
+      const h = randomHermitian(n, createRandom(20261201 + n).uniform);
       const out = eigenHermitian(h);
       const reference = mathjsEigenvalues(h);
       const scale = Math.max(...reference.map(Math.abs));
@@ -123,7 +123,7 @@ describe("Hermitian eigen-solver", () => {
 
   it("returns a degenerate spectrum exactly and orthonormal vectors inside each degenerate space", () => {
     // Spectrum chosen by construction (U Λ U†), so the exact eigenvalues are known.
-    const random = createSeededRandom(7);
+    const random = createRandom(7).uniform;
     const spectrum = [-2, -2, -2, 0.5, 1, 1, 3, 3, 3, 3];
     const h = hermitianWithSpectrum(spectrum, random);
     const out = eigenHermitian(h);
@@ -141,7 +141,7 @@ describe("Hermitian eigen-solver", () => {
   });
 
   it("reuses one solver without allocating per call and gives the same result each time", () => {
-    const random = createSeededRandom(99);
+    const random = createRandom(99).uniform;
     const h = randomHermitian(10, random);
     const solver = createHermitianEigenSolver(10);
     const out = createEigenOutput(10);
@@ -156,12 +156,12 @@ describe("generalised eigen-solver H c = E S c", () => {
   it("matches the eigenvalues of S^(-1/2) H S^(-1/2) computed independently and gives S-orthonormal c", () => {
     // Reference: with S = U diag(s) U†, S^(-1/2) = U diag(s^(-1/2)) U†; eigenvalues of S^(-1/2) H S^(-1/2)
     // are the generalised eigenvalues (Golub & Van Loan, §8.7). mathjs eigs supplies the standard solve.
-    const random = createSeededRandom(4242);
+    const random = createRandom(4242).uniform;
     for (const n of [1, 3, 6, 12]) {
       const h = randomHermitian(n, random);
       const sSpectrum = Array.from({ length: n }, () => 0.5 + random());
-      const sHalfInv = hermitianWithSpectrum(sSpectrum.map((s) => 1 / Math.sqrt(s)), createSeededRandom(n));
-      const s = hermitianWithSpectrum(sSpectrum, createSeededRandom(n));
+      const sHalfInv = hermitianWithSpectrum(sSpectrum.map((s) => 1 / Math.sqrt(s)), createRandom(n).uniform);
+      const s = hermitianWithSpectrum(sSpectrum, createRandom(n).uniform);
       // B = S^(-1/2) H S^(-1/2)
       const b = createComplexMatrix(n);
       const tmp = createComplexMatrix(n);

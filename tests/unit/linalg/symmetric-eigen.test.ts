@@ -1,6 +1,6 @@
 import { eigs } from "mathjs";
 import { describe, expect, it } from "vitest";
-import { createRandom } from "@/lib/fit/random";
+import { createRandom } from "@/lib/linalg";
 import { createSymmetricEigenSolver } from "@/lib/linalg";
 
 function randomSymmetric(n: number, seed: number): Float64Array {

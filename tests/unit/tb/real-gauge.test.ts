@@ -1,6 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { createRandom } from "@/lib/fit/random";
-import { eigenHermitian } from "@/lib/linalg";
+import { createRandom, eigenHermitian } from "@/lib/linalg";
 import {
   type ModelDocument,
   type Vec3,
