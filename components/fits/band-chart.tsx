@@ -2,6 +2,7 @@
 
 import { CartesianGrid, ComposedChart, Line, ReferenceArea, ResponsiveContainer, Scatter, Tooltip, XAxis, YAxis } from "recharts";
 import type { ChartPoint, PathTick } from "@/lib/views";
+import { niceStep } from "@/lib/views/band-series";
 import { tickLabeller } from "@/lib/views/ticks";
 
 /** Data points of one band, drawn as dots. */
@@ -40,6 +41,14 @@ interface BandChartProps {
 
 const AXIS_FONT = { fontSize: 12, fill: "#4b5563" };
 
+/** Ticks at round energies inside the domain, about six of them. */
+function energyTicks([low, high]: [number, number]): number[] {
+  const step = niceStep((high - low) / 6);
+  const ticks: number[] = [];
+  for (let e = Math.ceil(low / step) * step; e <= high + step * 1e-9; e += step) ticks.push(Number(e.toPrecision(12)));
+  return ticks;
+}
+
 /**
  * Energy against path distance: data as dots, model bands as lines, labelled high-symmetry ticks with
  * vertical grid lines at them. Zooming is the caller's `energyDomain`.
@@ -73,9 +82,10 @@ export function BandChart({ points, lines, ticks, energyDomain, window, energyTi
             type="number"
             dataKey="y"
             domain={energyDomain}
+            ticks={energyTicks(energyDomain)}
             allowDataOverflow
             tick={AXIS_FONT}
-            tickFormatter={(v: number) => (Math.abs(v) < 1e-9 ? "0" : v.toFixed(1).replace("-", "\u2212"))}
+            tickFormatter={(v: number) => (Math.abs(v) < 1e-9 ? "0" : String(v).replace("-", "\u2212"))}
             label={{ value: energyTitle, angle: -90, position: "insideLeft", ...AXIS_FONT }}
             width={56}
           />

@@ -81,6 +81,11 @@ export function draftFromRevision(revision: RevisionDetails, name: string): Laun
   };
 }
 
+function templateLatticeHint(template: { latticeConstant: { value: number; meaning: string } } | undefined): string {
+  if (!template) return "Empty: the template's own value.";
+  return `${template.latticeConstant.meaning}; empty: ${template.latticeConstant.value.toFixed(4)} Å`;
+}
+
 interface LaunchFormProps {
   slug: string;
   /** a new fit (pick dataset and template), or a new revision of a fit from revision `from` */
@@ -135,7 +140,11 @@ export function LaunchForm({ slug, mode }: LaunchFormProps) {
   const reading = useMemo(() => readLaunchDraft({ ...deferred, name: deferred.name || "preview", datasetId: deferred.datasetId || "preview" }), [deferred]);
 
   const bands = data.dataset?.summary.bands ?? [];
-  const modelBandCount = preview.model ? preview.model.sites.reduce((n, s) => n + s.orbitals.length, 0) : 0;
+  // The number of model bands depends on the sites and orbitals only, not on the values being edited.
+  const modelBandCount = useMemo(() => {
+    const sites = draft.source.kind === "template" ? buildTemplate(draft.source.template).sites : draft.source.document.sites;
+    return sites.reduce((n, s) => n + s.orbitals.length, 0);
+  }, [draft.source]);
   const mappingInput = reading.ok ? reading.request.mapping ?? { kind: "offset" as const } : { kind: "offset" as const };
   const pairs = bandPairs(mappingInput, bands, modelBandCount);
   const colours = dataBandColours(bands);
@@ -198,7 +207,7 @@ export function LaunchForm({ slug, mode }: LaunchFormProps) {
                   label="Lattice constant (Å)"
                   optional
                   inputMode="decimal"
-                  hint={`Empty: the template's ${templates.data?.templates.find((t) => t.id === (draft.source.kind === "template" ? draft.source.template : ""))?.latticeConstant.value ?? ""} Å`}
+                  hint={templateLatticeHint(templates.data?.templates.find((t) => t.id === (draft.source.kind === "template" ? draft.source.template : "")))}
                   value={draft.source.latticeConstant}
                   onChange={(e) => set("source", { ...draft.source, latticeConstant: e.target.value } as LaunchDraft["source"])}
                   errors={errorsFor("latticeConstant")}

@@ -38,11 +38,11 @@ export function ParameterEditor({ rows, onChange, errorsFor }: { rows: Parameter
         <thead className="bg-surface-sunken text-xs uppercase tracking-wide text-ink-muted">
           <tr>
             <th scope="col" className="border-y border-line px-3 py-2 text-left">Parameter</th>
-            <th scope="col" className="border-y border-line px-3 py-2 text-right">Start value</th>
+            <th scope="col" className="border-y border-line px-3 py-2 text-left">Start value</th>
             <th scope="col" className="border-y border-line px-3 py-2 text-left">Unit</th>
             <th scope="col" className="border-y border-line px-3 py-2 text-left">Fit it</th>
-            <th scope="col" className="border-y border-line px-3 py-2 text-right">Min</th>
-            <th scope="col" className="border-y border-line px-3 py-2 text-right">Max</th>
+            <th scope="col" className="border-y border-line px-3 py-2 text-left">Min</th>
+            <th scope="col" className="border-y border-line px-3 py-2 text-left">Max</th>
           </tr>
         </thead>
         <tbody>

@@ -126,7 +126,7 @@ export function RevisionView({ slug, fitId, number, canEdit }: { slug: string; f
           <Panel title="Parameters" flush>
             <ParameterTable parameters={result.parameters} warnings={result.warnings} />
           </Panel>
-          <div className="grid gap-6 lg:grid-cols-2">
+          <div className="grid gap-6 xl:grid-cols-[3fr_2fr]">
             <Panel title="Residuals per band" flush>
               <BandTable bands={result.bands} />
             </Panel>

@@ -98,8 +98,16 @@ export function distinctKPoints(points: readonly (PathKPoint & { kIndex: number 
   return [...byIndex.values()];
 }
 
+/** A round tick step (1, 2 or 5 × 10ⁿ) close to `rough`: the usual choice for readable axes (common practice). */
+export function niceStep(rough: number): number {
+  const power = 10 ** Math.floor(Math.log10(rough));
+  const scaled = rough / power;
+  return (scaled <= 1 ? 1 : scaled <= 2 ? 2 : scaled <= 5 ? 5 : 10) * power;
+}
+
 /**
- * Energy range (eV) to show: the given zoom window if any, else the data's range with 5 % padding.
+ * Energy range (eV) to show: the given zoom window if any, else the data's range with 5 % padding,
+ * widened to whole multiples of a round step (about six intervals) so the axis ticks read well.
  * @param zoom - the user's energy window, eV
  */
 export function energyDomain(points: readonly ChartDataPoint[], zoom?: { min: number; max: number }): [number, number] {
@@ -112,7 +120,8 @@ export function energyDomain(points: readonly ChartDataPoint[], zoom?: { min: nu
     high = Math.max(high, p.energy);
   }
   const pad = (high - low || 1) * 0.05;
-  return [low - pad, high + pad];
+  const step = niceStep((high - low + 2 * pad) / 6);
+  return [Math.floor((low - pad) / step) * step, Math.ceil((high + pad) / step) * step];
 }
 
 /**

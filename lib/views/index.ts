@@ -14,6 +14,7 @@ export {
   energyDomain,
   modelBandLines,
   modelEnergiesByKIndex,
+  niceStep,
   type ChartResidual,
   chartResiduals,
   revisionTransform,

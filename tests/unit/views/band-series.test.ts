@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { buildTemplate } from "@/lib/tb";
-import { chartResiduals, dataSeriesByBand, distinctKPoints, energyDomain, modelBandLines, modelEnergiesByKIndex, revisionTransform } from "@/lib/views/band-series";
+import { chartResiduals, niceStep, dataSeriesByBand, distinctKPoints, energyDomain, modelBandLines, modelEnergiesByKIndex, revisionTransform } from "@/lib/views/band-series";
 
 describe("dataSeriesByBand", () => {
   it("groups points by band and sorts each along the path", () => {
@@ -56,9 +56,13 @@ describe("distinctKPoints and energyDomain", () => {
     expect(distinctKPoints(points)).toHaveLength(2);
   });
 
-  it("pads the data range by 5 % unless a zoom window is given", () => {
+  it("pads the data range by 5 % to round steps unless a zoom window is given", () => {
     const points = [{ band: 1, pathDistance: 0, energy: -1 }, { band: 1, pathDistance: 1, energy: 1 }];
-    expect(energyDomain(points)).toEqual([-1.1, 1.1]);
+    // −1.1…1.1 spans 2.2 eV; 2.2/6 ≈ 0.37 rounds up to a step of 0.5 eV
+    expect(energyDomain(points)).toEqual([-1.5, 1.5]);
+    expect(niceStep(0.37)).toBe(0.5);
+    expect(niceStep(3)).toBe(5);
+    expect(niceStep(0.011)).toBeCloseTo(0.02, 15);
     expect(energyDomain(points, { min: -0.5, max: 0.5 })).toEqual([-0.5, 0.5]);
   });
 });
