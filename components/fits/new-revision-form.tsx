@@ -9,5 +9,5 @@ export function NewRevisionForm({ slug, fitId, from }: { slug: string; fitId: st
   const revision = useRevision(slug, fitId, from);
   if (revision.isPending) return <p className="text-sm text-ink-muted">Loading revision {from}…</p>;
   if (revision.error) return <Notice tone="error">{revision.error.message}</Notice>;
-  return <LaunchForm slug={slug} mode={{ kind: "new-revision", fitId, from, initial: draftFromRevision(revision.data, "") }} />;
+  return <LaunchForm slug={slug} mode={{ kind: "new-revision", fitId, from, initial: draftFromRevision(revision.data, revision.data.fitName) }} />;
 }

@@ -125,7 +125,10 @@ describe("fit views in the browser", () => {
     // A second revision with t3 freed, from the first one's fitted values.
     await page.getByRole("link", { name: "New revision from this one" }).click();
     await page.waitForURL("**/revisions/new?from=1");
+    // Pre-filled with revision 1's fitted values as start values.
+    expect(Number(await page.getByLabel("t1 start value").inputValue())).toBeCloseTo(t1!.value, 9);
     await page.getByLabel("fit t3").check();
+    await screenshot(page, "fits-06-new-revision-form");
     await page.getByRole("button", { name: "Launch revision" }).click();
     await page.waitForURL(/\/revisions\/2$/);
     await expect.poll(() => page.getByTestId("revision-status").textContent(), { timeout: 60_000 }).toBe("finished");
@@ -138,7 +141,7 @@ describe("fit views in the browser", () => {
     await table.waitFor();
     expect(await table.getByRole("row", { name: /t3/ }).textContent()).toContain("freed in B");
     await page.getByRole("img", { name: /revision 1 and revision 2 as lines/ }).waitFor();
-    await screenshot(page, "fits-06-compare");
+    await screenshot(page, "fits-07-compare");
     await page.context().close();
   });
 
@@ -153,7 +156,7 @@ describe("fit views in the browser", () => {
     await page.goto(`/w/${team.slug}/fits`);
     await page.getByRole("link", { name: "HQ-07 π bands" }).waitFor();
     expect(await page.getByRole("link", { name: "New fit" }).count()).toBe(0);
-    await screenshot(page, "fits-07-viewer");
+    await screenshot(page, "fits-08-viewer");
     await page.context().close();
     expect(problems).toEqual([]);
   });
