@@ -6,12 +6,23 @@ export type ByteSource = ReadableStream<Uint8Array> | AsyncIterable<Uint8Array |
 
 const encoder = new TextEncoder();
 
-/** Yields the chunks of any {@link ByteSource} as bytes, in order, without collecting them. */
+/** Largest chunk handed on, bytes: the parser splits and converts one chunk's rows at a time. */
+const MAX_CHUNK_BYTES = 64 * 1024;
+
+function* pieces(bytes: Uint8Array): Generator<Uint8Array> {
+  if (bytes.byteLength <= MAX_CHUNK_BYTES) yield bytes;
+  else for (let i = 0; i < bytes.byteLength; i += MAX_CHUNK_BYTES) yield bytes.subarray(i, i + MAX_CHUNK_BYTES);
+}
+
+/**
+ * Yields the chunks of any {@link ByteSource} as bytes, in order, without collecting them; chunks larger
+ * than 64 KiB (a whole file in memory) are handed on in 64 KiB views.
+ */
 export async function* byteChunks(source: ByteSource): AsyncGenerator<Uint8Array> {
   if (typeof source === "string") {
-    yield encoder.encode(source);
+    yield* pieces(encoder.encode(source));
   } else if (source instanceof Uint8Array) {
-    yield source;
+    yield* pieces(source);
   } else if ("getReader" in source) {
     // The browser's ReadableStream is not async-iterable everywhere yet; its reader works in all runtimes.
     const reader = source.getReader();
@@ -19,12 +30,12 @@ export async function* byteChunks(source: ByteSource): AsyncGenerator<Uint8Array
       for (;;) {
         const { done, value } = await reader.read();
         if (done) return;
-        yield value;
+        yield* pieces(value);
       }
     } finally {
       reader.releaseLock();
     }
   } else {
-    for await (const chunk of source) yield typeof chunk === "string" ? encoder.encode(chunk) : chunk;
+    for await (const chunk of source) yield* pieces(typeof chunk === "string" ? encoder.encode(chunk) : chunk);
   }
 }

@@ -16,22 +16,35 @@ export interface SplitRecords {
 const splitOnWhitespace = (text: string): string[] => text.trim().split(/[ \t]+/);
 
 /**
- * Splits record texts into cells. Character delimiters go through papaparse (RFC 4180 quoting, `""` inside
- * quotes); whitespace splitting is plain. Records are joined into one parse so that large files cost one
- * papaparse call per batch, not per line.
+ * Splits record texts into cells. Records without a `"` are split on the delimiter directly (the same cells
+ * papaparse gives them, at a fraction of the cost); the quoted ones of a batch go through one papaparse call
+ * (RFC 4180 quoting, `""` inside quotes). Whitespace splitting is plain (no quoting).
  * @param texts - complete records (no blank or comment lines)
  * @param delimiter - the field separator
  */
 export function splitRecords(texts: readonly string[], delimiter: Delimiter): SplitRecords {
   if (delimiter === "whitespace") return { fields: texts.map(splitOnWhitespace), problems: [] };
-  const parsed = Papa.parse<string[]>(texts.join("\n"), { delimiter, quoteChar: '"', skipEmptyLines: false });
-  const problems = parsed.errors.map((e) => ({
-    index: e.row ?? 0,
-    message: e.type === "Quotes" ? `badly quoted field (${e.message})` : e.message,
-  }));
-  if (parsed.data.length !== texts.length)
-    problems.push({ index: 0, message: "the quoting of these rows could not be read" });
-  return { fields: parsed.data, problems };
+  const fields: string[][] = new Array(texts.length);
+  const quoted: number[] = [];
+  for (let i = 0; i < texts.length; i++) {
+    if (texts[i].includes('"')) quoted.push(i);
+    else fields[i] = texts[i].split(delimiter);
+  }
+  const problems: SplitRecords["problems"] = [];
+  if (quoted.length === 0) return { fields, problems };
+  const parsed = Papa.parse<string[]>(quoted.map((i) => texts[i]).join("\n"), { delimiter, quoteChar: '"', skipEmptyLines: false });
+  for (const e of parsed.errors)
+    problems.push({
+      index: quoted[e.row ?? 0] ?? quoted[0],
+      message: e.type === "Quotes" ? `badly quoted field (${e.message})` : e.message,
+    });
+  if (parsed.data.length === quoted.length) quoted.forEach((i, j) => (fields[i] = parsed.data[j]));
+  else
+    quoted.forEach((i) => {
+      fields[i] = [];
+      problems.push({ index: i, message: "the quoting of this row could not be read" });
+    });
+  return { fields, problems };
 }
 
 const consistentCount = (rows: string[][]): number | null =>

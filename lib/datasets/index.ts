@@ -10,14 +10,20 @@ export {
   type LabelledKPoint,
   type MappingParseResult,
 } from "./mapping";
-export { parseDispersionFile, type DispersionParseResult } from "./parseDispersionFile";
+export {
+  parseDispersionFile,
+  parseDispersionTable,
+  type DispersionParseResult,
+  type DispersionTableResult,
+} from "./parseDispersionFile";
 export type { ByteSource } from "./byteSource";
-export type { DataPoint, AxisTick } from "./points";
+export { type DataPoint, type PointTable, tablePoints } from "./pointTable";
+export { type AxisTick, COLLINEAR_TOLERANCE, CUT_GAP_FRACTION } from "./pathCoordinates";
 export type { DatasetSummary } from "./summary";
 export { type FileIssue, LISTED_ISSUE_LIMIT, describeFileIssue } from "./issues";
 export { type ParseOptions, DEFAULT_MAX_BYTES, DEFAULT_MAX_POINTS, describeByteLimit } from "./options";
 export { type Delimiter, type DelimiterChoice, detectDelimiter, describeDelimiter } from "./delimiter";
-export { kColumnsToCartesian, labelledPointToCartesian } from "./kCoordinates";
+export { kColumnsBasis, kColumnsToCartesian, labelledPointToCartesian } from "./kCoordinates";
 export { type PathVertex, placePathVertices, interpolateAlongPath } from "./kPath";
 export {
   type ColumnRole,

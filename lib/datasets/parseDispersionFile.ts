@@ -3,43 +3,45 @@ import { type Delimiter, detectDelimiter, splitRecords } from "./delimiter";
 import { type FileIssue, IssueCollector, StopParsing } from "./issues";
 import type { DatasetMapping } from "./mapping";
 import { type ParseOptions, resolveParseOptions } from "./options";
-import { type DataPoint, resolvePoints } from "./points";
-import { type RawPoint, type RowReader, createRowReader } from "./rowReader";
-import { type DatasetSummary, summarisePoints } from "./summary";
-import { type TextRecord, readTextRecords } from "./textRecords";
+import { type DataPoint, type PointTable, PointTableBuilder, tablePoints } from "./pointTable";
+import { resolvePoints } from "./points";
+import { type RowReader, createRowReader } from "./rowReader";
+import { type DatasetSummary, summariseTable } from "./summary";
+import { type TextRecord, readTextRecordBatches } from "./textRecords";
 
-export type DispersionParseResult =
-  | { ok: true; points: DataPoint[]; summary: DatasetSummary; warnings: string[] }
-  | { ok: false; issues: FileIssue[]; issueCount: number };
+type Refusal = { ok: false; issues: FileIssue[]; issueCount: number };
+
+export type DispersionTableResult = { ok: true; table: PointTable; summary: DatasetSummary; warnings: string[] } | Refusal;
+export type DispersionParseResult = { ok: true; points: DataPoint[]; summary: DatasetSummary; warnings: string[] } | Refusal;
 
 /** Records read before the delimiter is chosen: the header and this many data rows. */
 const DETECTION_SAMPLE_ROWS = 20;
-/** Records split per papaparse call. */
-const BATCH_RECORDS = 2000;
 
 /**
- * Reads a CSV/TSV band file against its mapping, streaming: the file is never held as one string.
+ * Reads a CSV/TSV band file against its mapping into columns, streaming: the file is never held as one
+ * string, and points live in typed arrays (no object per row or point).
  * All-or-nothing: any bad row refuses the whole file with every problem listed by row and column (the first
  * 50, and the count). Stops early on binary data, invalid UTF-8 and the size and point limits.
  * @param source - the file's bytes (Web ReadableStream, Node Readable or other async iterable, or in memory)
  * @param mapping - a mapping validated by `datasetMappingSchema`
  * @param options - limits (bytes, points); defaults in `options.ts`
- * @returns points (k in 1/Å, energies and σ in eV), a summary and warnings; or the issues
+ * @returns the points as a {@link PointTable} (k in 1/Å, energies and σ in eV), a summary and warnings; or the issues
  */
-export async function parseDispersionFile(
+export async function parseDispersionTable(
   source: ByteSource,
   mapping: DatasetMapping,
   options?: ParseOptions,
-): Promise<DispersionParseResult> {
+): Promise<DispersionTableResult> {
   const { maxBytes, maxPoints } = resolveParseOptions(options);
   const issues = new IssueCollector();
-  const raw: RawPoint[] = [];
+  const rows = new PointTableBuilder({ sigma: !!mapping.sigma, weight: !!mapping.weight, label: !!mapping.label });
   let delimiter: Delimiter = ",";
   let headerRow = 0;
   let dataRows = 0;
   let reader: RowReader | null = null;
 
   const readBatch = (batch: TextRecord[]) => {
+    if (batch.length === 0) return;
     const split = splitRecords(
       batch.map((r) => r.text),
       delimiter,
@@ -49,11 +51,9 @@ export async function parseDispersionFile(
       bad.add(p.index);
       issues.addRow(batch[p.index]?.line ?? null, p.message);
     }
-    split.fields.forEach((fields, i) => {
-      if (!bad.has(i)) reader?.read(fields, batch[i].line, raw);
-    });
+    for (let i = 0; i < split.fields.length; i++) if (!bad.has(i)) reader?.read(split.fields[i], batch[i].line, rows);
     dataRows += batch.length;
-    if (raw.length > maxPoints)
+    if (rows.length > maxPoints)
       throw new StopParsing({
         row: batch.at(-1)?.line ?? null,
         column: null,
@@ -78,20 +78,17 @@ export async function parseDispersionFile(
 
   try {
     let sample: TextRecord[] | null = [];
-    let batch: TextRecord[] = [];
-    for await (const record of readTextRecords(source, maxBytes)) {
-      if (sample) {
-        sample.push(record);
-        if (sample.length > DETECTION_SAMPLE_ROWS) {
-          if (!start(sample)) return refused(issues);
-          sample = null;
-        }
+    for await (const batch of readTextRecordBatches(source, maxBytes)) {
+      if (!sample) {
+        readBatch(batch);
         continue;
       }
-      batch.push(record);
-      if (batch.length === BATCH_RECORDS) {
-        readBatch(batch);
-        batch = [];
+      const room = DETECTION_SAMPLE_ROWS + 1 - sample.length;
+      sample.push(...batch.slice(0, room));
+      if (sample.length > DETECTION_SAMPLE_ROWS) {
+        if (!start(sample)) return refused(issues);
+        sample = null;
+        readBatch(batch.slice(room));
       }
     }
     if (sample) {
@@ -101,7 +98,6 @@ export async function parseDispersionFile(
       }
       if (!start(sample)) return refused(issues);
     }
-    readBatch(batch);
   } catch (error) {
     if (!(error instanceof StopParsing)) throw error;
     issues.add(error.issue);
@@ -110,17 +106,34 @@ export async function parseDispersionFile(
 
   if (dataRows === 0) issues.addRow(headerRow, "the file has a header but no data rows");
   if (issues.count > 0) return refused(issues);
-  const resolved = resolvePoints(raw, mapping, issues);
+  const resolved = resolvePoints(rows, mapping, issues);
   if (!resolved) return refused(issues);
   return {
     ok: true,
-    points: resolved.points,
-    summary: summarisePoints(resolved.points, resolved.ticks, delimiter),
+    table: resolved.table,
+    summary: summariseTable(resolved.table, resolved.ticks, delimiter),
     warnings: resolved.warnings,
   };
 }
 
-const refused = (issues: IssueCollector): DispersionParseResult => ({
+/**
+ * {@link parseDispersionTable}, with the points as one object each (for fits, scripts and tests; the upload
+ * stores the columns directly).
+ * @param source - the file's bytes
+ * @param mapping - a mapping validated by `datasetMappingSchema`
+ * @param options - limits (bytes, points)
+ */
+export async function parseDispersionFile(
+  source: ByteSource,
+  mapping: DatasetMapping,
+  options?: ParseOptions,
+): Promise<DispersionParseResult> {
+  const result = await parseDispersionTable(source, mapping, options);
+  if (!result.ok) return result;
+  return { ok: true, points: tablePoints(result.table), summary: result.summary, warnings: result.warnings };
+}
+
+const refused = (issues: IssueCollector): Refusal => ({
   ok: false,
   issues: issues.listed,
   issueCount: issues.count,

@@ -2,18 +2,8 @@ import { toElectronvolts } from "@/lib/units";
 import { type Delimiter, describeDelimiter } from "./delimiter";
 import type { IssueCollector } from "./issues";
 import type { DatasetMapping } from "./mapping";
-import { readNumberCell } from "./numbers";
-
-/** One energy read from a row, before k is resolved: k values are the file's own (coordinates or a distance). */
-export interface RawPoint {
-  row: number;
-  kValues: readonly number[];
-  band: number;
-  energy: number;
-  sigma?: number;
-  weight?: number;
-  label?: string;
-}
+import { describeNumberCell, parseDecimalCell } from "./numbers";
+import type { PointTableBuilder } from "./pointTable";
 
 interface MappedColumn {
   index: number;
@@ -23,11 +13,12 @@ interface MappedColumn {
 /** Reads the data rows of one file against its header and mapping. */
 export interface RowReader {
   /**
-   * Appends the points of one data row to `out`; problems go to the collector and the row adds nothing.
+   * Appends the points of one data row to `out` (energies and σ in eV, k values as the file gives them);
+   * problems go to the collector and the row adds nothing.
    * @param fields - the row's cells
    * @param row - its line number in the file
    */
-  read(fields: readonly string[], row: number, out: RawPoint[]): void;
+  read(fields: readonly string[], row: number, out: PointTableBuilder): void;
 }
 
 const mappedColumnNames = (m: DatasetMapping): string[] =>
@@ -91,8 +82,11 @@ export function createRowReader(
   const label = mapping.label ? resolve(mapping.label.column) : null;
   if (issues.count > before) return null;
 
-  const energyUnit = mapping.energy.unit;
-  const sigmaUnit = mapping.sigma?.unit ?? energyUnit;
+  const energyFactor = toElectronvolts(1, mapping.energy.unit);
+  const sigmaFactor = toElectronvolts(1, mapping.sigma?.unit ?? mapping.energy.unit);
+  const kColumns = k.map((c) => c.index);
+  const energyColumns = energies.map((c) => c.index);
+  const energyValues = new Float64Array(energyColumns.length);
 
   return {
     read(fields, row, out) {
@@ -100,45 +94,62 @@ export function createRowReader(
         issues.addRow(row, `this row has ${fields.length} field${fields.length === 1 ? "" : "s"}, the header has ${names.length}`);
         return;
       }
+      // Plain locals and one helper instead of per-row closures or objects: this runs once per row.
       let rowOk = true;
-      const fail = (c: MappedColumn, message: string) => {
-        rowOk = false;
-        issues.add({ row, column: c.index + 1, columnName: c.name, message });
-      };
-      const numberAt = (c: MappedColumn): number => {
-        const cell = readNumberCell(fields[c.index]);
-        if (cell.ok) return cell.value;
-        fail(c, cell.message);
-        return NaN;
-      };
+      const k0 = numberAt(fields, kColumns[0], k, 0, row);
+      const k1 = kColumns.length > 1 ? numberAt(fields, kColumns[1], k, 1, row) : 0;
+      const k2 = kColumns.length > 2 ? numberAt(fields, kColumns[2], k, 2, row) : 0;
+      if (Number.isNaN(k0) || Number.isNaN(k1) || Number.isNaN(k2)) rowOk = false;
 
-      const kValues = k.map(numberAt);
-      const sigmaValue = sigma ? numberAt(sigma) : undefined;
-      if (sigma && sigmaValue !== undefined && Number.isFinite(sigmaValue) && sigmaValue <= 0)
-        fail(sigma, `σ must be positive, got ${fields[sigma.index].trim()}`);
-      const weightValue = weight ? numberAt(weight) : undefined;
-      if (weight && weightValue !== undefined && weightValue < 0)
-        fail(weight, `a weight cannot be negative, got ${fields[weight.index].trim()}`);
-      const labelText = label ? fields[label.index].trim() || undefined : undefined;
-
+      let sigmaValue = NaN;
+      if (sigma) {
+        sigmaValue = numberAt(fields, sigma.index, [sigma], 0, row);
+        if (Number.isNaN(sigmaValue)) rowOk = false;
+        else if (sigmaValue <= 0) {
+          rowOk = false;
+          fail(sigma, row, `σ must be positive, got ${fields[sigma.index].trim()}`);
+        }
+      }
+      let weightValue = NaN;
+      if (weight) {
+        weightValue = numberAt(fields, weight.index, [weight], 0, row);
+        if (Number.isNaN(weightValue)) rowOk = false;
+        else if (weightValue < 0) {
+          rowOk = false;
+          fail(weight, row, `a weight cannot be negative, got ${fields[weight.index].trim()}`);
+        }
+      }
       let bandFromColumn = 0;
       if (band) {
-        const text = fields[band.index].trim();
-        const cell = readNumberCell(text);
-        if (cell.ok && Number.isInteger(cell.value) && cell.value >= 1) bandFromColumn = cell.value;
-        else fail(band, `band index “${text}” is not a positive integer (bands count from 1)`);
+        const value = parseDecimalCell(fields[band.index]);
+        if (Number.isInteger(value) && value >= 1) bandFromColumn = value;
+        else {
+          rowOk = false;
+          fail(band, row, `band index “${fields[band.index].trim()}” is not a positive integer (bands count from 1)`);
+        }
       }
-      const energyValues = energies.map(numberAt);
+      for (let i = 0; i < energyColumns.length; i++) {
+        energyValues[i] = numberAt(fields, energyColumns[i], energies, i, row);
+        if (Number.isNaN(energyValues[i])) rowOk = false;
+      }
       if (!rowOk) return;
 
-      const sigmaEv = sigmaValue === undefined ? undefined : toElectronvolts(sigmaValue, sigmaUnit);
-      energyValues.forEach((value, i) => {
-        const point: RawPoint = { row, kValues, band: band ? bandFromColumn : i + 1, energy: toElectronvolts(value, energyUnit) };
-        if (sigmaEv !== undefined) point.sigma = sigmaEv;
-        if (weightValue !== undefined) point.weight = weightValue;
-        if (labelText !== undefined) point.label = labelText;
-        out.push(point);
-      });
+      const labelId = label ? out.labelIdOf(fields[label.index].trim()) : -1;
+      const sigmaEv = sigmaValue * sigmaFactor;
+      for (let i = 0; i < energyColumns.length; i++) {
+        out.push(row, k0, k1, k2, band ? bandFromColumn : i + 1, energyValues[i] * energyFactor, sigmaEv, weightValue, labelId);
+      }
     },
   };
+
+  function fail(c: MappedColumn, row: number, message: string): void {
+    issues.add({ row, column: c.index + 1, columnName: c.name, message });
+  }
+
+  /** The cell as a number, or NaN after reporting why it is not one. */
+  function numberAt(fields: readonly string[], index: number, columns: readonly MappedColumn[], which: number, row: number): number {
+    const value = parseDecimalCell(fields[index]);
+    if (Number.isNaN(value)) fail(columns[which], row, describeNumberCell(fields[index]));
+    return value;
+  }
 }

@@ -1,6 +1,7 @@
 import type { Vec3 } from "@/lib/tb/geometry/vec3";
 import type { Delimiter } from "./delimiter";
-import type { AxisTick, DataPoint } from "./points";
+import type { AxisTick } from "./pathCoordinates";
+import type { PointTable } from "./pointTable";
 
 /** What a parsed dataset holds, for the upload response and the dataset page. */
 export interface DatasetSummary {
@@ -25,44 +26,38 @@ export interface DatasetSummary {
   delimiter: Delimiter;
 }
 
-/**
- * Summarises parsed points in one pass.
- * @param points - at least one point
- */
-export function summarisePoints(points: readonly DataPoint[], ticks: AxisTick[], delimiter: Delimiter): DatasetSummary {
-  const bands = new Set<number>();
-  const kMin: Vec3 = [Infinity, Infinity, Infinity];
-  const kMax: Vec3 = [-Infinity, -Infinity, -Infinity];
-  let kPointCount = 0;
-  let dMin = Infinity, dMax = -Infinity, eMin = Infinity, eMax = -Infinity;
-  let hasSigma = false, hasWeight = false, hasLabel = false;
-  for (const p of points) {
-    bands.add(p.band);
-    for (let i = 0; i < 3; i++) {
-      kMin[i] = Math.min(kMin[i], p.k[i]);
-      kMax[i] = Math.max(kMax[i], p.k[i]);
-    }
-    kPointCount = Math.max(kPointCount, p.kIndex + 1);
-    dMin = Math.min(dMin, p.pathDistance);
-    dMax = Math.max(dMax, p.pathDistance);
-    eMin = Math.min(eMin, p.energy);
-    eMax = Math.max(eMax, p.energy);
-    hasSigma ||= p.sigma !== undefined;
-    hasWeight ||= p.weight !== undefined;
-    hasLabel ||= p.label !== undefined;
+const range = (values: Float64Array) => {
+  let min = Infinity;
+  let max = -Infinity;
+  for (let i = 0; i < values.length; i++) {
+    if (values[i] < min) min = values[i];
+    if (values[i] > max) max = values[i];
   }
+  return { min, max };
+};
+
+/**
+ * Summarises parsed points, one pass per column.
+ * @param table - at least one point
+ */
+export function summariseTable(table: PointTable, ticks: AxisTick[], delimiter: Delimiter): DatasetSummary {
+  const bands = new Set<number>();
+  for (let i = 0; i < table.length; i++) bands.add(table.band[i]);
+  let kPointCount = 0;
+  for (let i = 0; i < table.length; i++) if (table.kIndex[i] >= kPointCount) kPointCount = table.kIndex[i] + 1;
+  const kx = range(table.kx), ky = range(table.ky), kz = range(table.kz);
   return {
-    pointCount: points.length,
+    pointCount: table.length,
     bandCount: bands.size,
     bands: [...bands].sort((a, b) => a - b),
     kPointCount,
-    kRange: { min: kMin, max: kMax },
-    pathDistanceRange: { min: dMin, max: dMax },
-    energyRange: { min: eMin, max: eMax },
+    kRange: { min: [kx.min, ky.min, kz.min], max: [kx.max, ky.max, kz.max] },
+    pathDistanceRange: range(table.pathDistance),
+    energyRange: range(table.energy),
     ticks,
-    hasSigma,
-    hasWeight,
-    hasLabel,
+    hasSigma: table.sigma !== null,
+    hasWeight: table.weight !== null,
+    hasLabel: table.labelId?.some((id) => id >= 0) ?? false,
     delimiter,
   };
 }

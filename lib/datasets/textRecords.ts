@@ -20,26 +20,28 @@ const quoteCount = (text: string): number => {
 };
 
 /**
- * Streams the records of a UTF-8 delimited file: strips a byte-order mark, accepts LF and CRLF, skips blank
- * lines and `#` comment lines, and joins the lines of a quoted field that spans several lines (an odd number
- * of `"` so far means a quote is still open, RFC 4180 §2.6–2.7). Stops with an issue on a NUL byte or
- * invalid UTF-8 (binary data, UTF-16), on an unclosed quote, or once more than `maxBytes` have arrived.
+ * Streams the records of a UTF-8 delimited file, one batch per chunk read: strips a byte-order mark, accepts
+ * LF and CRLF, skips blank lines and `#` comment lines, and joins the lines of a quoted field that spans
+ * several lines (an odd number of `"` so far means a quote is still open, RFC 4180 §2.6–2.7). Stops with an
+ * issue on a NUL byte or invalid UTF-8 (binary data, UTF-16), on an unclosed quote, or once more than
+ * `maxBytes` have arrived.
  * @param source - the file's bytes
  * @param maxBytes - largest accepted size in bytes
+ * @returns batches of records in file order (a batch may be empty)
  */
-export async function* readTextRecords(source: ByteSource, maxBytes: number): AsyncGenerator<TextRecord> {
+export async function* readTextRecordBatches(source: ByteSource, maxBytes: number): AsyncGenerator<TextRecord[]> {
   const decoder = new TextDecoder("utf-8", { fatal: true });
   let bytesSeen = 0;
   const head: number[] = [];
   let lineNumber = 0;
   let partialLine = "";
-  // The record still waiting for its closing quote; held in an object so that closures update it.
-  const pending: { open: { line: number; text: string; quotes: number } | null } = { open: null };
+  // The record still waiting for its closing quote.
+  let open: { line: number; text: string; quotes: number } | null = null;
 
   // A UTF-16 byte-order mark: the file is text, only in an encoding we do not read.
   const isUtf16 = () => (head[0] === 0xff && head[1] === 0xfe) || (head[0] === 0xfe && head[1] === 0xff);
 
-  function* takeLine(raw: string): Generator<TextRecord> {
+  function takeLine(raw: string, out: TextRecord[]): void {
     lineNumber++;
     const line = raw.endsWith("\r") ? raw.slice(0, -1) : raw;
     if (line.includes("\0"))
@@ -49,18 +51,24 @@ export async function* readTextRecords(source: ByteSource, maxBytes: number): As
           ? UTF16_MESSAGE
           : "the file contains a NUL byte: this looks like a binary file, not delimited text",
       );
-    let open = pending.open;
+    const quotes = line.includes('"') ? quoteCount(line) : 0;
     if (open) {
       open.text += "\n" + line;
-      open.quotes += quoteCount(line);
+      open.quotes += quotes;
     } else {
-      const trimmed = line.trimStart();
-      if (trimmed === "" || trimmed.startsWith("#")) return;
-      open = pending.open = { line: lineNumber, text: line, quotes: quoteCount(line) };
+      const first = line.charCodeAt(0);
+      // Only lines starting with a blank need trimming to tell whether they are blank or a comment.
+      const trimmed = first <= 32 || first === 0xa0 || first === 0xfeff ? line.trimStart() : line;
+      if (trimmed === "" || trimmed.charCodeAt(0) === 35 /* # */) return;
+      if (quotes % 2 === 0) {
+        out.push({ line: lineNumber, text: line });
+        return;
+      }
+      open = { line: lineNumber, text: line, quotes };
     }
     if (open.quotes % 2 === 0) {
-      yield { line: open.line, text: open.text };
-      pending.open = null;
+      out.push({ line: open.line, text: open.text });
+      open = null;
     }
   }
 
@@ -79,11 +87,28 @@ export async function* readTextRecords(source: ByteSource, maxBytes: number): As
     bytesSeen += chunk.byteLength;
     if (bytesSeen > maxBytes) throw fileIssue(null, `the file is larger than the limit of ${describeByteLimit(maxBytes)}`);
     for (let i = 0; head.length < 2 && i < chunk.length; i++) head.push(chunk[i]);
-    const pieces = (partialLine + decode(chunk)).split("\n");
-    partialLine = pieces.pop() ?? "";
-    for (const piece of pieces) yield* takeLine(piece);
+    const text = partialLine + decode(chunk);
+    const batch: TextRecord[] = [];
+    let from = 0;
+    for (let end = text.indexOf("\n"); end !== -1; end = text.indexOf("\n", from)) {
+      takeLine(text.slice(from, end), batch);
+      from = end + 1;
+    }
+    partialLine = text.slice(from);
+    yield batch;
   }
   const rest = partialLine + decode(undefined);
-  if (rest !== "") yield* takeLine(rest);
-  if (pending.open) throw fileIssue(pending.open.line, "a quoted field opened on this row is never closed");
+  const last: TextRecord[] = [];
+  if (rest !== "") takeLine(rest, last);
+  if (open) throw fileIssue((open as { line: number }).line, "a quoted field opened on this row is never closed");
+  yield last;
+}
+
+/**
+ * The records of {@link readTextRecordBatches} one by one (the preview reads only the first few).
+ * @param source - the file's bytes
+ * @param maxBytes - largest accepted size in bytes
+ */
+export async function* readTextRecords(source: ByteSource, maxBytes: number): AsyncGenerator<TextRecord> {
+  for await (const batch of readTextRecordBatches(source, maxBytes)) yield* batch;
 }

@@ -125,11 +125,14 @@ describe("a 2D photoemission-style file", () => {
     expect(r.summary).toMatchObject({ hasSigma: true, hasLabel: true, bandCount: 2, kPointCount: 4 });
   });
 
-  it("measures each branch's path distance along its own points, jumps included", async () => {
+  it("lays the cuts end to end: cut A by projection on its line, cut B after a gap, ticks at the cuts", async () => {
     const r = accepted(await parseDispersionFile(text, mapping));
-    // Hand-computed: branch 1 steps 0.1, 0.1, then |(0.1,0.1) − (0.1,0)| = 0.1; branch 2 starts at 0.
+    // Hand-computed: cut A lies on ky = 0, so its axis is kx − min kx = 0, 0.1, 0.2 (length 0.2); cut B is one
+    // k-point (length 0); the gap is CUT_GAP_FRACTION (5 %) of the summed lengths, 0.01, so B sits at 0.21.
     const d = r.points.map((p) => p.pathDistance);
-    [0, 0.1, 0.2, 0.3, 0].forEach((v, i) => expect(d[i]).toBeCloseTo(v, 12));
+    [0, 0.1, 0.2, 0.21, 0.21].forEach((v, i) => expect(d[i]).toBeCloseTo(v, 12));
+    expect(r.summary.ticks.map((t) => t.label)).toEqual(["A", "B"]);
+    expect(r.summary.ticks[1].pathDistance).toBeCloseTo(0.21, 12);
   });
 
   it("takes σ in its own unit when the mapping says so", async () => {

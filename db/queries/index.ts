@@ -1,5 +1,0 @@
-export * from "./workspaces";
-export * from "./api-keys";
-export * from "./users";
-export * from "./health";
-export * from "./memberships";
