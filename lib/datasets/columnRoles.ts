@@ -80,12 +80,18 @@ const ROLE_PATTERNS: [ColumnRole, RegExp][] = [
  * Suggests a role per column from header names alone (`k_frac_1`, `kx`, `k_cart_y`, `path_distance`, `band`,
  * `energy_eV`, `E (meV)`, `dE`, `weight`, `cut`…), and the mapping pieces they imply: long format with a
  * band column, or wide format when several numbered energy columns (`band1`, `E_2`…) stand without one.
+ * A `branch` column is the band index when no band column exists (photoemission branches are the data's
+ * bands), otherwise a label; `cut` and `label` are always the label.
  * @param header - the header cells
  */
 export function guessColumnRoles(header: readonly string[]): ColumnRoleGuess {
-  const columns: ColumnGuess[] = header.map((column) => {
-    const base = baseName(column);
-    const role = ROLE_PATTERNS.find(([, pattern]) => pattern.test(base))?.[0] ?? "ignore";
+  const bases = header.map(baseName);
+  const roles = bases.map((base) => ROLE_PATTERNS.find(([, pattern]) => pattern.test(base))?.[0] ?? "ignore");
+  // Photoemission branches are the data's bands: without a band column, the first `branch` numbers them.
+  const branch = bases.findIndex((base, i) => base === "branch" && roles[i] === "label");
+  if (!roles.includes("band") && branch !== -1) roles[branch] = "band";
+  const columns: ColumnGuess[] = header.map((column, i) => {
+    const role = roles[i];
     const unit = role === "energy" || role === "bandEnergy" || role === "sigma" ? guessEnergyUnit(column) : undefined;
     return unit ? { column, role, unit } : { column, role };
   });

@@ -55,13 +55,13 @@ describe("dataset upload in the browser", () => {
   it("previews a dropped photoemission file with guessed roles, uploads it and shows chart and table", async () => {
     await page.setInputFiles('input[type="file"]', fixture);
     await page.getByRole("heading", { name: "Columns" }).waitFor();
-    // Guesses from the header (lib/datasets guessColumnRoles): E (meV) → energy in meV, dE (meV) → σ, cut → label.
+    // Guesses from the header (lib/datasets guessColumnRoles): E (meV) → energy in meV, dE (meV) → σ, cut → label,
+    // branch → band (the file has no band column).
     expect(await page.getByLabel("E (meV)", { exact: true }).inputValue()).toBe("energy");
     expect(await page.getByLabel("dE (meV)", { exact: true }).inputValue()).toBe("sigma");
     expect(await page.getByLabel("cut", { exact: true }).inputValue()).toBe("label");
+    expect(await page.getByLabel("branch", { exact: true }).inputValue()).toBe("band");
     expect(await page.getByLabel("Energy unit").inputValue()).toBe("meV");
-    // "branch" is guessed as a label too; here it numbers the bands.
-    await page.getByLabel("branch", { exact: true }).selectOption("band");
     await page.getByLabel("Source").selectOption("photoemission");
     await page.getByLabel("Name", { exact: true }).fill("HQ-12 cuts through K");
     await page.getByLabel(/Energy reference/).fill("Fermi level");
@@ -94,7 +94,6 @@ describe("dataset upload in the browser", () => {
     const bad = readFileSync(fixture, "utf8").replace("A,1.33493,0.85155,1,-1055.2,8.8", "A,1.33493,0.85155,1,-10x5.2,8.8");
     await page.setInputFiles('input[type="file"]', { name: "hq12-with-a-typo.csv", mimeType: "text/csv", buffer: Buffer.from(bad) });
     await page.getByRole("heading", { name: "Columns" }).waitFor();
-    await page.getByLabel("branch", { exact: true }).selectOption("band");
     await page.getByRole("button", { name: "Upload dataset" }).click();
     const list = page.getByRole("list", { name: "Problems in the file" });
     await list.waitFor();

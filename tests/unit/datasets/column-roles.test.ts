@@ -19,16 +19,27 @@ describe("column role guesses", () => {
     });
   });
 
-  it("reads a photoemission header with meV units, error bars and a cut label", () => {
+  it("reads a photoemission header with meV units, error bars and a cut label; branch is the band", () => {
     const g = guessColumnRoles(["cut", "kx", "ky", "branch", "E (meV)", "dE (meV)", "note"]);
+    expect(g.columns.map((c) => c.role)).toEqual(["label", "kCartesian", "kCartesian", "band", "energy", "sigma", "ignore"]);
     expect(g.suggestion).toEqual({
       k: { kind: "cartesian", columns: ["kx", "ky"] },
       format: "long",
+      band: { column: "branch" },
       energy: { column: "E (meV)", unit: "meV" },
       sigma: { column: "dE (meV)", unit: "meV" },
       label: { column: "cut" },
     });
     expect(g.columns.at(-1)).toEqual({ column: "note", role: "ignore" });
+  });
+
+  it("keeps branch as the label when the file has a band column, and cut or label always as the label", () => {
+    const g = guessColumnRoles(["kx", "band", "branch", "E"]);
+    expect(g.columns.map((c) => c.role)).toEqual(["kCartesian", "band", "label", "energy"]);
+    expect(g.suggestion).toMatchObject({ band: { column: "band" }, label: { column: "branch" } });
+    const labelled = guessColumnRoles(["label", "kx", "branch", "E"]);
+    expect(labelled.columns.map((c) => c.role)).toEqual(["label", "kCartesian", "band", "energy"]);
+    expect(labelled.suggestion).toMatchObject({ band: { column: "branch" }, label: { column: "label" } });
   });
 
   it("suggests wide format for numbered energy columns without a band column, in numeric order", () => {
