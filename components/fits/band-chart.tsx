@@ -1,6 +1,6 @@
 "use client";
 
-import { CartesianGrid, ComposedChart, Line, ReferenceArea, ResponsiveContainer, Scatter, Tooltip, XAxis, YAxis } from "recharts";
+import { CartesianGrid, ComposedChart, Line, ReferenceArea, ResponsiveContainer, Scatter, Tooltip, XAxis, YAxis, ZAxis } from "recharts";
 import type { ChartPoint, PathTick } from "@/lib/views";
 import { niceStep } from "@/lib/views/band-series";
 import { tickLabeller } from "@/lib/views/ticks";
@@ -89,11 +89,16 @@ export function BandChart({ points, lines, ticks, energyDomain, window, energyTi
             label={{ value: energyTitle, angle: -90, position: "insideLeft", ...AXIS_FONT }}
             width={56}
           />
+          {/* symbol area in px²: small dots, so that model lines stay visible where they lie on the data */}
+          <ZAxis range={[18, 18]} />
           <Tooltip
             isAnimationActive={false}
             formatter={(value) => (typeof value === "number" ? `${value.toFixed(3).replace("-", "\u2212")}` : String(value))}
             labelFormatter={() => ""}
           />
+          {points.map((series) => (
+            <Scatter key={series.key} name={series.label} data={series.points} fill={series.colour} shape="circle" fillOpacity={0.5} isAnimationActive={false} />
+          ))}
           {lines.map((line) => (
             <Line
               key={line.key}
@@ -102,7 +107,7 @@ export function BandChart({ points, lines, ticks, energyDomain, window, energyTi
               dataKey="y"
               type="linear"
               stroke={line.colour}
-              strokeWidth={line.faint ? 1 : 2}
+              strokeWidth={line.faint ? 1 : 1.5}
               strokeOpacity={line.faint ? 0.6 : 1}
               strokeDasharray={line.dashed ? "6 4" : undefined}
               dot={false}
@@ -111,13 +116,10 @@ export function BandChart({ points, lines, ticks, energyDomain, window, energyTi
               isAnimationActive={false}
             />
           ))}
-          {points.map((series) => (
-            <Scatter key={series.key} name={series.label} data={series.points} fill={series.colour} shape="circle" isAnimationActive={false} r={2} />
-          ))}
         </ComposedChart>
       </ResponsiveContainer>
       <figcaption className="mt-1 flex flex-wrap gap-x-4 gap-y-1 text-xs text-ink-muted">
-        <span>Dots: data. Lines: model.</span>
+        <span>Dots: data. Lines: model (drawn over the dots).</span>
         {points.map((s) => (
           <span key={s.key} className="inline-flex items-center gap-1">
             <span aria-hidden="true" className="inline-block size-2.5 rounded-full" style={{ backgroundColor: s.colour }} />

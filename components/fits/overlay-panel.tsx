@@ -1,7 +1,7 @@
 "use client";
 
 import { useMemo, useState } from "react";
-import { CartesianGrid, ReferenceLine, ResponsiveContainer, Scatter, ScatterChart, Tooltip, XAxis, YAxis } from "recharts";
+import { CartesianGrid, ReferenceLine, ResponsiveContainer, Scatter, ScatterChart, Tooltip, XAxis, YAxis, ZAxis } from "recharts";
 import { Button, Input, Notice } from "@/components/ui";
 import { dataBandColours, modelBandColours } from "@/lib/views/band-colours";
 import { bandPairs } from "@/lib/views/band-mapping";
@@ -169,6 +169,7 @@ export function OverlayPanel({
                 <XAxis type="number" dataKey="x" domain={ticks.length >= 2 ? [ticks[0].position, ticks[ticks.length - 1].position] : ["auto", "auto"]} ticks={ticks.map((t) => t.position)} tickFormatter={(v: number) => ticks.find((t) => t.position === v)?.label ?? ""} tick={AXIS_FONT} label={{ value: "k along the path (1/Å)", position: "insideBottom", offset: -14, ...AXIS_FONT }} />
                 <YAxis type="number" dataKey="y" tick={AXIS_FONT} width={56} tickFormatter={(v: number) => v.toFixed(2).replace("-", "\u2212")} label={{ value: "model − data (eV)", angle: -90, position: "insideLeft", ...AXIS_FONT }} />
                 <ReferenceLine y={0} stroke="#6b7280" />
+                <ZAxis range={[18, 18]} />
                 <Tooltip isAnimationActive={false} formatter={(v) => (typeof v === "number" ? v.toFixed(4) : String(v))} />
                 {bands
                   .filter((b) => !hidden.has(b))

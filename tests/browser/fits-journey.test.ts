@@ -142,6 +142,22 @@ describe("fit views in the browser", () => {
     expect(await table.getByRole("row", { name: /t3/ }).textContent()).toContain("freed in B");
     await page.getByRole("img", { name: /revision 1 and revision 2 as lines/ }).waitFor();
     await screenshot(page, "fits-07-compare");
+
+    // A long third revision (many starts): the progress bar moves while it runs, and cancelling stops it.
+    await page.goto(`${revisionPath.replace(/\/1$/, "/2")}`);
+    await page.getByRole("link", { name: "New revision from this one" }).click();
+    await page.getByLabel("Starts").fill("400");
+    await page.getByRole("button", { name: "Launch revision" }).click();
+    await page.waitForURL(/\/revisions\/3$/);
+    const bar = page.getByRole("progressbar", { name: "Fit progress" });
+    await bar.waitFor();
+    await expect.poll(() => bar.getAttribute("aria-valuetext"), { timeout: 30_000 }).toMatch(/^iteration \d+, χ² /);
+    const first = Number(await bar.getAttribute("aria-valuenow"));
+    await expect.poll(async () => Number(await bar.getAttribute("aria-valuenow")), { timeout: 30_000 }).toBeGreaterThan(first);
+    await screenshot(page, "fits-08-progress");
+    await page.getByRole("button", { name: "Cancel fit" }).click();
+    await expect.poll(() => page.getByTestId("revision-status").textContent(), { timeout: 30_000 }).toBe("cancelled");
+    await page.getByText("The fit was stopped; the results below are its best point so far.").waitFor();
     await page.context().close();
   });
 
@@ -156,7 +172,7 @@ describe("fit views in the browser", () => {
     await page.goto(`/w/${team.slug}/fits`);
     await page.getByRole("link", { name: "HQ-07 π bands" }).waitFor();
     expect(await page.getByRole("link", { name: "New fit" }).count()).toBe(0);
-    await screenshot(page, "fits-08-viewer");
+    await screenshot(page, "fits-09-viewer");
     await page.context().close();
     expect(problems).toEqual([]);
   });
