@@ -1,20 +1,28 @@
 #!/usr/bin/env bash
 # npm start: sets everything up on this machine and serves Bandwright on http://127.0.0.1:$PORT.
-# Ctrl-C stops everything this script started, PostgreSQL included. See README.md.
+# Ctrl-C stops everything this script started (PostgreSQL included when it started it). See README.md.
 set -euo pipefail
 cd "$(dirname "$0")/.."
 . scripts/lib/common.sh
 
 export NEXT_TELEMETRY_DISABLED=1
+# The environment wins over .env.local, which only fills in what is unset.
+ensure_node_modules
+ensure_local_env
+
 PORT=${PORT:-3000}
 PG_PORT=${PG_PORT:-54329}
 PG_DATA="$PWD/.data/postgres"
 MAIL_SINK_SMTP_PORT=${MAIL_SINK_SMTP_PORT:-2525}
 MAIL_SINK_HTTP_PORT=${MAIL_SINK_HTTP_PORT:-2526}
 export PORT MAIL_SINK_SMTP_PORT MAIL_SINK_HTTP_PORT
+# One host name everywhere: better-auth compares request origins with APP_URL.
+export APP_URL=${APP_URL:-http://127.0.0.1:$PORT}
 
-ensure_node_modules
-ensure_local_secret
+# A second `npm start` in this folder would rebuild the .next folder the first one serves and fight over
+# its ports and PostgreSQL: refuse before touching anything.
+take_lock .data/start.lock "npm start" "$APP_URL"
+require_free_port "$PORT" "the app, PORT"
 
 OWN_POSTGRES=
 children=()
@@ -22,44 +30,55 @@ cleanup() {
   trap - INT TERM EXIT
   for pid in "${children[@]}"; do kill -TERM "$pid" 2>/dev/null || true; done
   for pid in "${children[@]}"; do wait "$pid" 2>/dev/null || true; done
-  [ -n "$OWN_POSTGRES" ] && stop_postgres "$PG_DATA"
+  if [ -n "$OWN_POSTGRES" ]; then stop_postgres "$PG_DATA"; fi
   log "stopped"
 }
-trap cleanup INT TERM EXIT
+# Ctrl-C ends the script (the EXIT trap cleans up) instead of carrying on with the next step.
+trap 'exit 130' INT TERM
+trap cleanup EXIT
 
 if [ -z "${DATABASE_URL:-}" ]; then
   start_postgres "$PG_DATA" "$PG_PORT"
-  OWN_POSTGRES=1
+  OWN_POSTGRES=$PG_STARTED_HERE
   ensure_database "$PG_DATA" "$PG_PORT" bandwright
   export DATABASE_URL="postgres://postgres@127.0.0.1:$PG_PORT/bandwright"
+  SEED_DEMO=${SEED_DEMO:-1}
 else
   log "using the PostgreSQL server in DATABASE_URL"
+  # Demo accounts with a published password never appear on somebody else's server unless asked for.
+  SEED_DEMO=${SEED_DEMO:-0}
 fi
 
-# One host name everywhere: better-auth compares request origins with APP_URL.
-export APP_URL=${APP_URL:-http://127.0.0.1:$PORT}
 export SMTP_URL=${SMTP_URL:-smtp://127.0.0.1:$MAIL_SINK_SMTP_PORT}
 if [ "$SMTP_URL" = "smtp://127.0.0.1:$MAIL_SINK_SMTP_PORT" ]; then
+  require_free_port "$MAIL_SINK_SMTP_PORT" "the mail sink, MAIL_SINK_SMTP_PORT"
+  require_free_port "$MAIL_SINK_HTTP_PORT" "the mail sink, MAIL_SINK_HTTP_PORT"
   export MAIL_SINK_URL=http://127.0.0.1:$MAIL_SINK_HTTP_PORT
 fi
 
 node_modules/.bin/tsx scripts/migrate.ts
-node_modules/.bin/tsx scripts/seed.ts
+if [ "$SEED_DEMO" = 1 ]; then node_modules/.bin/tsx scripts/seed.ts; else log "not seeding the demo (SEED_DEMO=1 to seed)"; fi
 
 log "building (next build)"
-node "$(next_bin)" build >/tmp/bandwright-build.log 2>&1 || { tail -n 40 /tmp/bandwright-build.log; die "next build failed (full log: /tmp/bandwright-build.log)"; }
+BUILD_LOG="$PWD/.data/build.log"
+node "$(next_bin)" build >"$BUILD_LOG" 2>&1 || { tail -n 40 "$BUILD_LOG"; die "next build failed (full log: $BUILD_LOG)"; }
 
 if [ -n "${MAIL_SINK_URL:-}" ]; then
   node_modules/.bin/tsx scripts/mail-sink.ts & children+=($!)
 fi
 node_modules/.bin/tsx workers/main.ts & children+=($!)
-node "$(next_bin)" start -H 127.0.0.1 -p "$PORT" & children+=($!)
+NODE_ENV=production node_modules/.bin/tsx scripts/serve-app.ts "$PORT" & children+=($!)
 
-for _ in $(seq 1 60); do
-  curl -fsS -o /dev/null "http://127.0.0.1:$PORT/api/health" 2>/dev/null && break
+healthy=
+for _ in $(seq 1 90); do
+  for pid in "${children[@]}"; do
+    kill -0 "$pid" 2>/dev/null || die "a process stopped during start-up (see its messages above)"
+  done
+  if http_ok "http://127.0.0.1:$PORT/api/health"; then healthy=1; break; fi
   sleep 1
 done
+[ -n "$healthy" ] || die "the app did not report healthy at http://127.0.0.1:$PORT/api/health within 90 s"
 
 node_modules/.bin/tsx scripts/print-welcome.ts
-# Stop everything as soon as any one process ends (or on Ctrl-C, through the trap).
+# Stop everything as soon as any one process ends (or on Ctrl-C, through the traps).
 wait -n "${children[@]}" || true

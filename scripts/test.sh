@@ -14,7 +14,9 @@ export NEXT_DIST_DIR=${NEXT_DIST_DIR:-.next-test}
 RESULTS=${TEST_RESULTS_DIR:-$PWD/test-results}
 
 ensure_node_modules
-ensure_local_secret
+ensure_local_env
+# Two runs on one data folder would drop each other's database.
+take_lock "$PG_DATA.lock" "npm test" "data folder $PG_DATA"
 
 if [ ! -x /usr/bin/chromium ]; then
   if [ "$(id -u)" = 0 ] && command -v apt-get >/dev/null; then
@@ -29,13 +31,14 @@ fi
 OWN_POSTGRES=
 cleanup() {
   trap - INT TERM EXIT
-  [ -n "$OWN_POSTGRES" ] && stop_postgres "$PG_DATA"
+  if [ -n "$OWN_POSTGRES" ]; then stop_postgres "$PG_DATA"; fi
 }
-trap cleanup INT TERM EXIT
+trap 'exit 130' INT TERM
+trap cleanup EXIT
 
 if [ -z "${TEST_DATABASE_URL:-}" ]; then
   start_postgres "$PG_DATA" "$PG_PORT"
-  OWN_POSTGRES=1
+  OWN_POSTGRES=$PG_STARTED_HERE
   ensure_database "$PG_DATA" "$PG_PORT" bandwright_test recreate
   export DATABASE_URL="postgres://postgres@127.0.0.1:$PG_PORT/bandwright_test"
 else
