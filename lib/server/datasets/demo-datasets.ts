@@ -2,8 +2,8 @@ import { readFile } from "node:fs/promises";
 import { fileURLToPath } from "node:url";
 import { z } from "zod";
 import { findDatasetBySha256, insertDatasetWithPoints } from "@/db/queries/datasets";
-import { datasetMappingSchema, describeFileIssue, parseDispersionFile } from "@/lib/datasets";
-import { datasetRecord, pointRecords, sha256Hex } from "./stored-dataset";
+import { datasetMappingSchema, describeFileIssue, parseDispersionTable } from "@/lib/datasets";
+import { datasetRecord, sha256Hex } from "./stored-dataset";
 
 // The demo workspace's datasets: the files of fixtures/ with the mappings in fixtures/mappings.json.
 // Called by scripts/seed.ts (a script: no "server-only" imports here).
@@ -26,7 +26,7 @@ export async function seedDemoDatasets(params: { workspaceId: string; uploadedBy
     const bytes = new Uint8Array(await readFile(`${fixturesFolder}${fileName}`));
     const sha256 = sha256Hex(bytes);
     if (await findDatasetBySha256({ workspaceId: params.workspaceId, sha256 })) continue;
-    const parsed = await parseDispersionFile(bytes, mapping);
+    const parsed = await parseDispersionTable(bytes, mapping);
     if (!parsed.ok) throw new Error(`fixture ${fileName} does not parse: ${parsed.issues.map(describeFileIssue).join("; ")}`);
     const record = datasetRecord({
       workspaceId: params.workspaceId,
@@ -35,7 +35,7 @@ export async function seedDemoDatasets(params: { workspaceId: string; uploadedBy
       summary: parsed.summary,
       file: { name: fileName, type: fileType(fileName), bytes, sha256 },
     });
-    await insertDatasetWithPoints(record, pointRecords(parsed.points));
+    await insertDatasetWithPoints(record, parsed.table);
     added.push(mapping.name);
   }
   return added;

@@ -1,8 +1,9 @@
 import { createHash, randomUUID } from "node:crypto";
-import type { NewDataset, NewDatasetPoint } from "@/db/schema";
-import type { DataPoint, DatasetMapping, DatasetSummary } from "@/lib/datasets";
+import type { NewDataset } from "@/db/schema";
+import type { DatasetMapping, DatasetSummary } from "@/lib/datasets";
 
-// Shared by the upload route and the demo seed (a script, hence no "server-only" here).
+// Shared by the upload route and the demo seed (a script, hence no "server-only" here). The points go to
+// `insertDatasetWithPoints` as the parsed table's columns.
 
 /** SHA-256 of a file's bytes, lower-case hex: the duplicate check and the provenance of every fit. */
 export const sha256Hex = (bytes: Uint8Array): string => createHash("sha256").update(bytes).digest("hex");
@@ -34,22 +35,4 @@ export function datasetRecord(input: {
     bandCount: summary.bandCount,
     uploadedBy: input.uploadedBy,
   };
-}
-
-/** Parsed points as rows, numbered in file order (the index fits' residuals refer to). */
-export function pointRecords(points: readonly DataPoint[]): Omit<NewDatasetPoint, "datasetId">[] {
-  return points.map((p, index) => ({
-    index,
-    row: p.row,
-    kIndex: p.kIndex,
-    kx: p.k[0],
-    ky: p.k[1],
-    kz: p.k[2],
-    pathDistance: p.pathDistance,
-    band: p.band,
-    energy: p.energy,
-    sigma: p.sigma ?? null,
-    weight: p.weight ?? null,
-    label: p.label ?? null,
-  }));
 }

@@ -1,11 +1,11 @@
 import "server-only";
 import { NextResponse } from "next/server";
 import { findDatasetBySha256, insertDatasetWithPoints } from "@/db/queries/datasets";
-import { describeByteLimit, parseDatasetMapping, parseDispersionFile, type FileIssue } from "@/lib/datasets";
+import { describeByteLimit, parseDatasetMapping, parseDispersionTable, type FileIssue } from "@/lib/datasets";
 import { env } from "@/lib/env";
 import type { WorkspaceAccess } from "@/lib/server/workspace-access";
 import { readUploadParts } from "./read-upload";
-import { datasetRecord, pointRecords, sha256Hex } from "./stored-dataset";
+import { datasetRecord, sha256Hex } from "./stored-dataset";
 
 /** An issue as the 422 body lists it: row and column 1-based (null when not tied to one), with the header name. */
 export type UploadIssue = FileIssue;
@@ -101,7 +101,7 @@ export async function uploadDataset(request: Request, access: WorkspaceAccess): 
   if (existing) return conflict(access.workspace.slug, existing);
 
   // The stored bytes, not anything the browser parsed, decide: re-read them as a stream.
-  const parsed = await parseDispersionFile(new Blob([bytes]).stream(), mapping.mapping, {
+  const parsed = await parseDispersionTable(new Blob([bytes]).stream(), mapping.mapping, {
     maxBytes,
     maxPoints: env.DATASET_MAX_POINTS,
   });
@@ -120,7 +120,7 @@ export async function uploadDataset(request: Request, access: WorkspaceAccess): 
     file: { name: parts.file.name || "upload.csv", type: parts.file.type || "text/csv", bytes, sha256 },
   });
   try {
-    await insertDatasetWithPoints(record, pointRecords(parsed.points));
+    await insertDatasetWithPoints(record, parsed.table);
   } catch (error) {
     // Two uploads of the same file at once: the unique index lets one through.
     if (!isUniqueViolation(error)) throw error;
