@@ -4,7 +4,8 @@ import { useMutation, useQuery } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useDeferredValue, useMemo, useState } from "react";
 import { Button, Notice, Panel, SelectField, TextField } from "@/components/ui";
-import { resolveModelSpec } from "@/lib/fit/bands/schema";
+import { DEFAULT_BAND_MAPPING, bandMappingSchema, fitOptionsSchema, modelSpecSchema, resolveModelSpec } from "@/lib/fit/bands/schema";
+import { IDENTITY_TRANSFORM } from "@/lib/views/band-series";
 import { TEMPLATE_IDS, type ModelDocument, type TemplateId, buildTemplate } from "@/lib/tb";
 import { dataBandColours } from "@/lib/views/band-colours";
 import { bandPairs } from "@/lib/views/band-mapping";
@@ -127,17 +128,22 @@ export function LaunchForm({ slug, mode }: LaunchFormProps) {
     },
   });
 
+  // The preview follows the form a render behind, so typing stays quick on big datasets.
   const deferred = useDeferredValue(draft);
+  const reading = useMemo(() => readLaunchDraft({ ...deferred, name: deferred.name || "preview", datasetId: deferred.datasetId || "preview" }), [deferred]);
   const preview = useMemo(() => {
-    const reading = readLaunchDraft({ ...deferred, name: deferred.name || "preview", datasetId: deferred.datasetId || "preview" });
     if (!reading.ok) return { model: null, error: "Fix the marked fields to update the preview." };
     try {
-      return { model: resolveModelSpec(reading.request.model as Parameters<typeof resolveModelSpec>[0]), error: null };
+      return { model: resolveModelSpec(modelSpecSchema.parse(reading.request.model)), error: null };
     } catch (error) {
       return { model: null, error: (error as Error).message };
     }
-  }, [deferred]);
-  const reading = useMemo(() => readLaunchDraft({ ...deferred, name: deferred.name || "preview", datasetId: deferred.datasetId || "preview" }), [deferred]);
+  }, [reading]);
+  const previewMapping = reading.ok ? bandMappingSchema.parse(reading.request.mapping ?? DEFAULT_BAND_MAPPING) : DEFAULT_BAND_MAPPING;
+  const previewOptions = fitOptionsSchema.safeParse(reading.ok ? reading.request.options : {});
+  const previewTransform = previewOptions.success
+    ? { offset: previewOptions.data.energyOffset.value, renormalisation: previewOptions.data.renormalisation.value, reference: previewOptions.data.renormalisation.reference }
+    : IDENTITY_TRANSFORM;
 
   const bands = data.dataset?.summary.bands ?? [];
   // The number of model bands depends on the sites and orbitals only, not on the values being edited.
@@ -145,8 +151,7 @@ export function LaunchForm({ slug, mode }: LaunchFormProps) {
     const sites = draft.source.kind === "template" ? buildTemplate(draft.source.template).sites : draft.source.document.sites;
     return sites.reduce((n, s) => n + s.orbitals.length, 0);
   }, [draft.source]);
-  const mappingInput = reading.ok ? reading.request.mapping ?? { kind: "offset" as const } : { kind: "offset" as const };
-  const pairs = bandPairs(mappingInput, bands, modelBandCount);
+  const pairs = bandPairs(previewMapping, bands, modelBandCount);
   const colours = dataBandColours(bands);
   const window = reading.ok ? reading.request.window ?? null : null;
 
@@ -231,8 +236,8 @@ export function LaunchForm({ slug, mode }: LaunchFormProps) {
             <OverlayPanel
               dataset={data.dataset}
               points={data.points.points}
-              models={[{ key: "preview", label: "model", model: preview.model, transform: { offset: Number(reading.ok ? reading.request.options?.energyOffset?.value ?? 0 : 0), renormalisation: 1, reference: 0 } }]}
-              mapping={reading.ok ? (reading.request.mapping as never) ?? { kind: "offset", firstModelBand: 1 } : { kind: "offset", firstModelBand: 1 }}
+              models={[{ key: "preview", label: "model", model: preview.model, transform: previewTransform }]}
+              mapping={previewMapping}
               window={window}
               showResiduals={false}
             />

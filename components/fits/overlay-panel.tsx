@@ -90,7 +90,7 @@ export function OverlayPanel({
   }));
   const lines: LineSeries[] = computed.flatMap((m) =>
     m.lines
-      .filter((l) => mapping.kind === "nearest" || shownModelBands.has(l.band) || lineColours[l.band - 1] !== undefined)
+      // A model band disappears with the data band mapped to it; unmapped model bands stay, drawn faint.
       .filter((l) => mapping.kind === "nearest" || !pairs.some((p) => p.modelBand === l.band && hidden.has(p.dataBand)))
       .map((l) => ({
         key: `${m.key}-${l.band}`,
