@@ -13,6 +13,30 @@ const progressIntervalMs = 500;
 export type FitJobOutcome = { revisionId: string; outcome: "succeeded" | "cancelled" | "failed" | "skipped"; attempt?: number };
 
 type FitJobContext = { runner: string; appUrl: string };
+type LoadedRevision = NonNullable<Awaited<ReturnType<typeof getRevisionForRun>>>;
+
+/**
+ * Tells the launcher how the revision ended when its options ask for it (`notifyByEmail`). A mail that
+ * cannot be sent is logged, never fails the job.
+ */
+async function notifyLauncher(
+  loaded: LoadedRevision,
+  appUrl: string,
+  outcome: { status: "succeeded" | "cancelled" | "failed"; rms?: number; reason?: string },
+): Promise<void> {
+  const notify = revisionSnapshotSchema.safeParse(loaded.revision.inputs).data?.options.notifyByEmail;
+  if (!notify || !loaded.launcherEmail) return;
+  const { fit, revision, workspaceSlug } = loaded;
+  await sendMail(
+    fitFinishedMessage({
+      to: loaded.launcherEmail,
+      fitName: fit.name,
+      revision: revision.number,
+      ...outcome,
+      revisionUrl: `${appUrl}/w/${encodeURIComponent(workspaceSlug)}/fits/${fit.id}/revisions/${revision.number}`,
+    }),
+  ).catch((error: unknown) => console.error(`fit ${revision.id}: finish e-mail failed:`, error));
+}
 
 /**
  * Runs one revision job: claims the revision (only from queued, or running after a dead attempt), fits
@@ -25,20 +49,18 @@ export async function runFitJob(revisionId: string, context: FitJobContext): Pro
   if (!loaded) return { revisionId, outcome: "skipped" };
   const attempt = await claimRevision({ revisionId, runner: context.runner });
   if (attempt === null) return { revisionId, outcome: "skipped" };
+  const fail = async (reason: string): Promise<FitJobOutcome> => {
+    if (!(await failRevision({ revisionId, attempt, reason }))) return { revisionId, outcome: "skipped", attempt };
+    await notifyLauncher(loaded, context.appUrl, { status: "failed", reason });
+    return { revisionId, outcome: "failed", attempt };
+  };
 
   const snapshot = revisionSnapshotSchema.safeParse(loaded.revision.inputs);
-  if (!snapshot.success) {
-    await failRevision({ revisionId, attempt, reason: "The stored inputs of this revision cannot be read." });
-    return { revisionId, outcome: "failed", attempt };
-  }
+  if (!snapshot.success) return fail("The stored inputs of this revision cannot be read.");
   const { model, mapping, window, options } = snapshot.data;
   const points = await loadDatasetPoints(snapshot.data.dataset.id);
   const validation = validateBandFit({ points, model, mapping, window: window ?? undefined, options });
-  if (!validation.ok) {
-    const reason = `The fit's inputs no longer pass the checks: ${new BandFitError(validation.issues).message}`;
-    await failRevision({ revisionId, attempt, reason });
-    return { revisionId, outcome: "failed", attempt };
-  }
+  if (!validation.ok) return fail(`The fit's inputs no longer pass the checks: ${new BandFitError(validation.issues).message}`);
 
   const controller = new AbortController();
   let superseded = false;
@@ -83,8 +105,7 @@ export async function runFitJob(revisionId: string, context: FitJobContext): Pro
     result = await runBandFit(validation.prepared, { onProgress, signal: controller.signal });
   } catch (error) {
     if (!(error instanceof BandFitError)) throw error;
-    await failRevision({ revisionId, attempt, reason: error.message });
-    return { revisionId, outcome: "failed", attempt };
+    return fail(error.message);
   } finally {
     clearInterval(poll);
   }
@@ -113,19 +134,7 @@ export async function runFitJob(revisionId: string, context: FitJobContext): Pro
     }),
   });
   if (!written) return { revisionId, outcome: "skipped", attempt };
-  if (options.notifyByEmail && loaded.launcherEmail) {
-    const { fit, revision, workspaceSlug } = loaded;
-    await sendMail(
-      fitFinishedMessage({
-        to: loaded.launcherEmail,
-        fitName: fit.name,
-        revision: revision.number,
-        status,
-        rms: result.rms,
-        revisionUrl: `${context.appUrl}/w/${encodeURIComponent(workspaceSlug)}/fits/${fit.id}/revisions/${revision.number}`,
-      }),
-    ).catch((error: unknown) => console.error(`fit ${revisionId}: finish e-mail failed:`, error));
-  }
+  await notifyLauncher(loaded, context.appUrl, { status, rms: result.rms });
   return { revisionId, outcome: status, attempt };
 }
 
@@ -133,12 +142,10 @@ export async function runFitJob(revisionId: string, context: FitJobContext): Pro
  * The dead-letter path: a job whose every attempt ended without a result (the worker died each time, or
  * the handler kept failing) ends its revision `failed` with a reason, never stuck in running.
  */
-export async function failAbandonedRevision(revisionId: string): Promise<void> {
+export async function failAbandonedRevision(revisionId: string, appUrl: string): Promise<void> {
   const loaded = await getRevisionForRun(revisionId);
   if (!loaded) return;
   const attempts = loaded.revision.attempts;
-  await failRevision({
-    revisionId,
-    reason: `The fit did not finish: ${attempts} attempt${attempts === 1 ? "" : "s"} ended without a result (the worker stopped or met an error). Launch a new revision to try again.`,
-  });
+  const reason = `The fit did not finish: ${attempts} attempt${attempts === 1 ? "" : "s"} ended without a result (the worker stopped or met an error). Launch a new revision to try again.`;
+  if (await failRevision({ revisionId, reason })) await notifyLauncher(loaded, appUrl, { status: "failed", reason });
 }

@@ -47,7 +47,7 @@ async function main(): Promise<void> {
     });
   }
   await boss.work<FitJobData>(fitDeadLetterQueue.name, { pollingIntervalSeconds: 1, batchSize: 5 }, async (jobs) => {
-    for (const job of jobs) await failAbandonedRevision(job.data.revisionId);
+    for (const job of jobs) await failAbandonedRevision(job.data.revisionId, env.APP_URL);
   });
   console.log(`worker ${workerName}: listening (${env.WORKER_FIT_CONCURRENCY} fit slots)`);
 

@@ -55,18 +55,20 @@ export function fitFinishedMessage(input: {
   status: "succeeded" | "cancelled" | "failed";
   /** unweighted RMS of the residuals, eV (absent when the fit failed) */
   rms?: number;
+  /** why a failed fit failed, in words */
+  reason?: string;
   revisionUrl: string;
 }): MailMessage {
-  const { to, fitName, revision, status, rms, revisionUrl } = input;
+  const { to, fitName, revision, status, rms, reason, revisionUrl } = input;
   const outcome = { succeeded: "finished", cancelled: "was cancelled", failed: "failed" }[status];
   const subject = `Fit "${fitName}" revision ${revision} ${outcome}`;
-  const rmsLine = rms === undefined ? "" : `RMS of the residuals: ${(rms * 1000).toFixed(1)} meV.`;
-  const text = [`Revision ${revision} of the fit "${fitName}" ${outcome}.`, rmsLine, "", `See the result: ${revisionUrl}`]
-    .filter((line, i) => i !== 1 || line !== "")
-    .join("\n");
+  const details = [rms === undefined ? "" : `RMS of the residuals: ${(rms * 1000).toFixed(1)} meV.`, reason ? `Reason: ${reason}` : ""].filter(
+    (line) => line !== "",
+  );
+  const text = [`Revision ${revision} of the fit "${fitName}" ${outcome}.`, ...details, "", `See the result: ${revisionUrl}`].join("\n");
   const html =
     `<p>Revision ${revision} of the fit <strong>${escapeHtml(fitName)}</strong> ${outcome}.</p>` +
-    (rmsLine ? `<p>${escapeHtml(rmsLine)}</p>` : "") +
+    details.map((line) => `<p>${escapeHtml(line)}</p>`).join("") +
     `<p><a href="${escapeHtml(revisionUrl)}">See the result</a></p>`;
   return { to, subject, text, html };
 }

@@ -1,13 +1,26 @@
+import PgBoss from "pg-boss";
 import { beforeAll, describe, expect, it } from "vitest";
 import { countResiduals } from "@/db/queries/fit-residuals";
-import { getRevision } from "@/db/queries/fits";
+import { createFitWithFirstRevision, getRevision } from "@/db/queries/fits";
 import { getWorkspaceBySlug } from "@/db/queries/workspaces";
+import { env } from "@/lib/env";
 import { parameterSetSchema } from "@/lib/export";
-import { compileModel, computeBands, templateKPath } from "@/lib/tb";
+import { type FitJobData, fitQueue, queueSchema } from "@/lib/server/queues";
+import { type Vec3, buildTemplate, compileModel, computeBands, templateKPath } from "@/lib/tb";
 import { listMail } from "@/tests/support/mail";
 import { type Team, createTeam } from "@/tests/support/workspace";
 import { rebuiltBands } from "@/tests/unit/export/rebuild";
-import { type RevisionBody, honeycombDataset, honeycombTruth, isFinal, longFit, siliconDataset, waitForRevision } from "./helpers";
+import {
+  type RevisionBody,
+  bandCsv,
+  honeycombDataset,
+  honeycombTruth,
+  insertDataset,
+  isFinal,
+  longFit,
+  siliconDataset,
+  waitForRevision,
+} from "./helpers";
 
 // Fit runs through the routes alone, against the real PostgreSQL, pg-boss and the harness's worker (issue 5).
 
@@ -93,14 +106,40 @@ describe("a fit on a fixture dataset", () => {
   });
 
   it("tells the launcher by e-mail, with a link to the revision page", async () => {
-    const to = await emailOf("editor");
-    const deadline = Date.now() + 10_000;
-    let found: { text: string } | undefined;
-    while (!found && Date.now() < deadline) {
-      found = (await listMail()).find((m) => m.to.includes(to) && m.subject.startsWith('Fit "graphene pz" revision 1'));
-      if (!found) await new Promise((resolve) => setTimeout(resolve, 250));
+    const found = await mailFor(await emailOf("editor"), 'Fit "graphene pz" revision 1 finished');
+    expect(found.text).toContain(`/w/${team.slug}/fits/${fitId}/revisions/1`);
+    expect(found.text).toMatch(/RMS of the residuals: \d+\.\d meV/);
+  });
+
+  it("tells the launcher by e-mail when a revision fails, with the reason", async () => {
+    // A stored revision whose window keeps no point: the route would refuse it, so it is written directly
+    // and its job sent, as if the data had changed under a queued fit. The worker must end it failed.
+    const workspace = await getWorkspaceBySlug(team.slug);
+    const first = (await team.viewer.get(`${base()}/fits/${fitId}/revisions/1`)).body as { inputs: Record<string, unknown> };
+    const me = (await team.editor.get("/api/auth/get-session")).body as { user: { id: string } };
+    const created = await createFitWithFirstRevision({
+      workspaceId: workspace!.id,
+      datasetId,
+      name: "graphene pz, empty window",
+      notes: "",
+      launchedBy: me.user.id,
+      inputs: { ...first.inputs, window: { min: 100, max: 101 } },
+      launchWarnings: [],
+    });
+    const boss = new PgBoss({ connectionString: env.DATABASE_URL, schema: queueSchema, supervise: false, schedule: false });
+    await boss.start();
+    try {
+      const data: FitJobData = { revisionId: created.revisionId };
+      expect(await boss.send(fitQueue.name, data)).toBeTruthy();
+    } finally {
+      await boss.stop({ graceful: false });
     }
-    expect(found?.text).toContain(`/w/${team.slug}/fits/${fitId}/revisions/1`);
+    const failed = await waitForRevision(team.viewer, `${base()}/fits/${created.fitId}/revisions/1`, isFinal);
+    expect(failed.status).toBe("failed");
+    expect(failed.failureReason).toContain("no longer pass the checks");
+    const found = await mailFor(await emailOf("editor"), 'Fit "graphene pz, empty window" revision 1 failed');
+    expect(found.text).toContain(`Reason: ${failed.failureReason}`);
+    expect(found.text).toContain(`/w/${team.slug}/fits/${created.fitId}/revisions/1`);
   });
 
   it("starts revision 2 from revision 1's fitted values", async () => {
@@ -117,6 +156,62 @@ describe("a fit on a fixture dataset", () => {
     const ep = inputs.inputs.model.parameters.find((p) => p.name === "E_p[C]");
     expect(ep?.free).toBe(false);
     expect(ep?.value).toBeCloseTo(honeycombTruth["E_p[C]"], 5);
+  });
+});
+
+describe("a new revision with its own model", () => {
+  it("applies the parameter edits to the model given, not to the copied one", async () => {
+    const next = await team.editor.post(`${base()}/fits/${fitId}/revisions`, {
+      from: 1,
+      model: { template: "honeycomb-pz", parameters: { t1: { value: 2.4 } } },
+      parameters: { t1: { value: 2.5, free: false } },
+    });
+    expect(next.status, JSON.stringify(next.body)).toBe(201);
+    const number = (next.body as { revision: number }).revision;
+    const path = `${base()}/fits/${fitId}/revisions/${number}`;
+    const body = (await team.viewer.get(path)).body as { inputs: { model: { parameters: { name: string; value: number; free: boolean }[] } } };
+    const t1 = body.inputs.model.parameters.find((p) => p.name === "t1");
+    expect(t1).toMatchObject({ value: 2.5, free: false });
+    // E_p[C] comes from the template given (its default 0), not from revision 1's fit (0.1)
+    expect(body.inputs.model.parameters.find((p) => p.name === "E_p[C]")?.value).toBe(0);
+    const unknown = await team.editor.post(`${base()}/fits/${fitId}/revisions`, {
+      from: 1,
+      model: { template: "honeycomb-pz" },
+      parameters: { "V_ss_sigma[Si-Si,1]": { value: 1 } },
+    });
+    expect(unknown.status).toBe(422);
+    expect(JSON.stringify(unknown.body)).toContain('the model has no parameter \\"V_ss_sigma[Si-Si,1]\\"');
+    expect((await waitForRevision(team.viewer, path, isFinal)).status).toBe("succeeded");
+  });
+});
+
+describe("the frame check", () => {
+  it("warns at launch when the data's labelled points sit where the model has other points, and stores the warning", async () => {
+    // The honeycomb bands written in a frame turned by 30°: the data's M lands on the model's Γ–K line.
+    const turn = (k: Vec3): Vec3 => {
+      const [c, s] = [Math.cos(Math.PI / 6), Math.sin(Math.PI / 6)];
+      return [c * k[0] - s * k[1], s * k[0] + c * k[1], k[2]];
+    };
+    const model = buildTemplate("honeycomb-pz");
+    const turned = bandCsv(model, 60, turn);
+    expect(turned.vertices.map((v) => v.label)).toEqual(["Γ", "M", "K", "Γ"]);
+    const turnedId = await insertDataset(team.slug, "graphene cut, turned cell", turned.csv, turned.vertices);
+    const launched = await team.editor.post(`${base()}/fits`, { datasetId: turnedId, name: "turned", model: { template: "honeycomb-pz" } });
+    expect(launched.status, JSON.stringify(launched.body)).toBe(201);
+    const { fitId: turnedFit, warnings } = launched.body as { fitId: string; warnings: { kind: string; message: string }[] };
+    expect(warnings).toHaveLength(1);
+    expect(warnings[0].kind).toBe("frame-mismatch");
+    expect(warnings[0].message).toMatch(/M at k = .* from the model's nearest M; K at k = .* from the model's nearest K/);
+    const stored = (await team.viewer.get(`${base()}/fits/${turnedFit}/revisions/1`)).body as { launchWarnings: unknown };
+    expect(stored.launchWarnings).toEqual(warnings);
+
+    // the same data in the model's own frame: no warning
+    const own = bandCsv(model, 60);
+    const ownId = await insertDataset(team.slug, "graphene cut, model cell", own.csv, own.vertices);
+    const plain = await team.editor.post(`${base()}/fits`, { datasetId: ownId, name: "own frame", model: { template: "honeycomb-pz" } });
+    expect(plain.status).toBe(201);
+    expect((plain.body as { warnings: unknown[] }).warnings).toEqual([]);
+    for (const id of [turnedFit, (plain.body as { fitId: string }).fitId]) await waitForRevision(team.viewer, `${base()}/fits/${id}/revisions/1`, isFinal);
   });
 });
 
@@ -140,6 +235,17 @@ describe("cancellation", () => {
     expect(ended.result?.parameters.length).toBeGreaterThan(0);
   });
 });
+
+/** The first mail to `to` whose subject starts with `subject`, waiting up to 10 s for it. */
+async function mailFor(to: string, subject: string): Promise<{ text: string }> {
+  const deadline = Date.now() + 10_000;
+  while (Date.now() < deadline) {
+    const found = (await listMail()).find((m) => m.to.includes(to) && m.subject.startsWith(subject));
+    if (found) return found;
+    await new Promise((resolve) => setTimeout(resolve, 250));
+  }
+  throw new Error(`no mail "${subject}" to ${to}`);
+}
 
 async function emailOf(role: "editor"): Promise<string> {
   const me = await team[role].get("/api/auth/get-session");

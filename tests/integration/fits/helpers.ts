@@ -10,21 +10,29 @@ import { parseDispersionFile } from "@/lib/datasets";
 import { type ModelDocument, type Vec3, buildTemplate, compileModel, computeBands, templateKPath } from "@/lib/tb";
 import type { TestClient } from "@/tests/support/client";
 
-/** Long-format CSV of every band of `doc` at its own values along its k-path (Cartesian 1/Å, eV). */
-export function bandCsv(doc: ModelDocument, kCount: number): { csv: string; k: Vec3[] } {
-  const k = templateKPath(doc, { totalPoints: kCount }).k;
+/**
+ * Long-format CSV of every band of `doc` at its own values along its k-path (Cartesian 1/Å, eV), with the
+ * path's vertices. `frame` turns the written k (the energies stay those of the model's own k), as data
+ * computed in a differently oriented cell would be.
+ */
+export function bandCsv(doc: ModelDocument, kCount: number, frame: (k: Vec3) => Vec3 = (k) => k): { csv: string; k: Vec3[]; vertices: LabelledPoint[] } {
+  const path = templateKPath(doc, { totalPoints: kCount });
   const compiled = compileModel(doc);
-  const { energies } = computeBands(compiled, undefined, k);
+  const { energies } = computeBands(compiled, undefined, path.k);
   const n = compiled.orbitalCount;
   const lines = ["kx,ky,kz,band,energy"];
-  k.forEach((kk, i) => {
-    for (let b = 0; b < n; b++) lines.push(`${kk.join(",")},${b + 1},${energies[i * n + b]}`);
+  path.k.forEach((kk, i) => {
+    for (let b = 0; b < n; b++) lines.push(`${frame(kk).join(",")},${b + 1},${energies[i * n + b]}`);
   });
-  return { csv: lines.join("\n") + "\n", k };
+  const vertices = path.ticks.map((t) => ({ label: t.label, k: frame(path.k[t.index]) }));
+  return { csv: lines.join("\n") + "\n", k: path.k, vertices };
 }
 
-/** Inserts a dataset parsed from `csv` into the workspace; returns its id. */
-export async function insertDataset(slug: string, name: string, csv: string): Promise<string> {
+/** A labelled point of an upload mapping (Cartesian 1/Å), which the dataset stores as an axis tick. */
+export type LabelledPoint = { label: string; k: Vec3 };
+
+/** Inserts a dataset parsed from `csv` into the workspace, with ticks at `labelled` points; returns its id. */
+export async function insertDataset(slug: string, name: string, csv: string, labelled: LabelledPoint[] = []): Promise<string> {
   const workspace = await getWorkspaceBySlug(slug);
   if (!workspace) throw new Error(`no workspace ${slug}`);
   const mapping = {
@@ -32,7 +40,11 @@ export async function insertDataset(slug: string, name: string, csv: string): Pr
     source: "calculation" as const,
     format: "long" as const,
     delimiter: "auto" as const,
-    k: { kind: "cartesian" as const, columns: ["kx", "ky", "kz"] },
+    k: {
+      kind: "cartesian" as const,
+      columns: ["kx", "ky", "kz"],
+      ...(labelled.length ? { path: labelled.map((p) => ({ label: p.label, k: [...p.k], coordinates: "cartesian" as const })) } : {}),
+    },
     band: { column: "band" },
     energy: { column: "energy", unit: "eV" as const },
   };
