@@ -23,8 +23,8 @@ const parameterChangeSchema = z
 
 /**
  * Body of `POST …/fits/{fitId}/revisions`: start from revision `from` (its inputs, with its fitted values as
- * start values) and apply the changes given. `model` replaces the model outright; `parameters` edits the
- * copied model's parameters by name; `options` fields replace the copied options' fields; `window: null`
+ * start values) and apply the changes given. `model` replaces the model outright; `parameters` edits by
+ * name the parameters of the model the revision starts from (`model` when given, else the copied one); `options` fields replace the copied options' fields; `window: null`
  * removes the window.
  */
 export const newRevisionSchema = z

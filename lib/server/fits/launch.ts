@@ -39,6 +39,19 @@ function refuse(issues: BandFitIssue[]): never {
 }
 
 /**
+ * Resolves a model spec (a document, or a template request) into a document.
+ * @throws AppError validation_failed with the model's issues under `model.…`
+ */
+function resolveModel(spec: ModelSpec): ModelDocument {
+  try {
+    return resolveModelSpec(spec);
+  } catch (error) {
+    if (error instanceof ModelError) refuse(error.issues.map((i) => ({ path: i.path ? `model.${i.path}` : "model", message: i.message })));
+    throw error;
+  }
+}
+
+/**
  * Every check BEFORE a revision is created: the dataset belongs to the workspace, the model resolves, and
  * `validateBandFit` passes on the dataset's own points (mapping onto bands that exist, a window that keeps
  * points, …). Returns the snapshot to store and the frame check's warnings.
@@ -47,13 +60,7 @@ function refuse(issues: BandFitIssue[]): never {
 async function prepareSnapshot(request: RevisionRequest): Promise<{ snapshot: RevisionSnapshot; warnings: LaunchWarning[] }> {
   const dataset = await getDatasetForFit({ workspaceId: request.workspaceId, datasetId: request.datasetId });
   if (!dataset) refuse([{ path: "datasetId", message: "there is no dataset with this id in the workspace" }]);
-  let model: ModelDocument;
-  try {
-    model = resolveModelSpec(request.model);
-  } catch (error) {
-    if (error instanceof ModelError) refuse(error.issues.map((i) => ({ path: i.path ? `model.${i.path}` : "model", message: i.message })));
-    throw error;
-  }
+  const model = resolveModel(request.model);
   const points = await loadDatasetPoints(dataset.id);
   const mapping = request.mapping ?? DEFAULT_BAND_MAPPING;
   const options = request.options ?? fitOptionsSchema.parse({});
@@ -133,7 +140,8 @@ function nextOptions(parent: RevisionSnapshot, result: BandFitResult | null, cha
 
 /**
  * Launches revision n+1 of a fit from revision `from`: its snapshot, with its fitted model (when it has a
- * result) as the start, plus the changes in `input`.
+ * result) as the start, plus the changes in `input`. A `model` in `input` replaces that start, and the
+ * `parameters` edits apply to whichever model the revision starts from.
  */
 export async function launchRevision(params: {
   workspaceId: string;
@@ -146,7 +154,8 @@ export async function launchRevision(params: {
   const { input } = params;
   const parentSnapshot = revisionSnapshotSchema.parse(params.parent.inputs);
   const parentResult = (params.parent.result ?? null) as BandFitResult | null;
-  const startModel = input.model ?? withParameters(parentResult?.fittedModel ?? parentSnapshot.model, input.parameters);
+  const baseModel = input.model ? resolveModel(input.model) : (parentResult?.fittedModel ?? parentSnapshot.model);
+  const startModel = withParameters(baseModel, input.parameters);
   const window = input.window === null ? undefined : (input.window ?? parentSnapshot.window ?? undefined);
   const { snapshot, warnings } = await prepareSnapshot({
     workspaceId: params.workspaceId,
