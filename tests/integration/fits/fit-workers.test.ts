@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { countResiduals } from "@/db/queries/fit-residuals";
 import { getRevision } from "@/db/queries/fits";
 import { getWorkspaceBySlug } from "@/db/queries/workspaces";
+import { env } from "@/lib/env";
 import { type Team, createTeam } from "@/tests/support/workspace";
 import { type RevisionBody, honeycombDataset, isFinal, longFit, siliconDataset, startWorker, stopWorker, waitForRevision, workerReady } from "./helpers";
 
@@ -48,9 +49,10 @@ describe("several workers", () => {
 
   it("a worker SIGKILLed mid-fit: the job expires, is retried, and the revision ends final with one result", async () => {
     const datasetId = await siliconDataset(team.slug);
-    // Four long fits so that at least one lands on a worker of ours (the harness's worker takes two).
+    // The harness's worker shares the queue with its WORKER_FIT_CONCURRENCY slots (it was started with this
+    // process's environment): one long fit more than it can hold must run on a worker of ours.
     const paths: string[] = [];
-    for (let i = 0; i < 4; i++) {
+    for (let i = 0; i <= env.WORKER_FIT_CONCURRENCY; i++) {
       const launched = await team.editor.post(`${base()}/fits`, { ...longFit(datasetId, 4000), name: `long ${i}` });
       expect(launched.status).toBe(201);
       paths.push(`${base()}/fits/${(launched.body as { fitId: string }).fitId}/revisions/1`);
@@ -67,6 +69,8 @@ describe("several workers", () => {
     expect(victim, "one fit should run on a test worker").toBeDefined();
     const killed = workers.find((w, i) => ["test-worker-a", "test-worker-b"][i] === victim!.runner)!;
     await stopWorker(killed, "SIGKILL");
+    // The other fits only filled the slots: cancel them to keep the machine free.
+    for (const path of paths.filter((p) => p !== victim!.path)) expect((await team.editor.post(`${path}/cancel`)).status).toBe(200);
     // A replacement, as an operator would start; expiry = 4 s × 1.25 + 15 s margin, maintenance every 1 s.
     const replacement = startWorker("test-worker-c");
     workers.push(replacement);
@@ -78,6 +82,6 @@ describe("several workers", () => {
     expect(ended.runner).not.toBe(victim!.runner);
     const fitId = victim!.path.split("/fits/")[1].split("/")[0];
     expect(await countResiduals({ revisionId: await revisionRowId(fitId, 1) })).toBe(ended.result!.pointsUsed);
-    for (const path of paths) await waitForRevision(team.viewer, path, isFinal, 30_000);
+    for (const path of paths) await waitForRevision(team.viewer, path, isFinal, 10_000);
   }, 90_000);
 });
