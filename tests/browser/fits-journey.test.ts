@@ -146,7 +146,7 @@ describe("fit views in the browser", () => {
     // A long third revision (many starts): the progress bar moves while it runs, and cancelling stops it.
     await page.goto(`${revisionPath.replace(/\/1$/, "/2")}`);
     await page.getByRole("link", { name: "New revision from this one" }).click();
-    await page.getByLabel("Starts").fill("400");
+    await page.getByLabel("Starts", { exact: true }).fill("400");
     await page.getByRole("button", { name: "Launch revision" }).click();
     await page.waitForURL(/\/revisions\/3$/);
     const bar = page.getByRole("progressbar", { name: "Fit progress" });
