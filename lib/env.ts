@@ -1,6 +1,6 @@
 import { z } from "zod";
 
-// The one place that reads process.env. Parsed on first import; a missing or malformed variable stops the
+// The one place that reads process.env. Parsed on first use; a missing or malformed variable stops the
 // process with a message naming it. Defaults here are the documented defaults (see .env.example).
 const envSchema = z.object({
   NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
@@ -20,6 +20,18 @@ const envSchema = z.object({
   AUTH_RATE_LIMIT_MAX: z.coerce.number().int().positive().default(10),
   /** Length of that window, seconds. */
   AUTH_RATE_LIMIT_WINDOW_SECONDS: z.coerce.number().int().positive().default(60),
+  /** Failed sign-ins allowed per account (e-mail address) per window, from any number of addresses. */
+  AUTH_ACCOUNT_RATE_LIMIT_MAX: z.coerce.number().int().positive().default(20),
+  /** Length of that window, seconds (15 minutes). */
+  AUTH_ACCOUNT_RATE_LIMIT_WINDOW_SECONDS: z.coerce.number().int().positive().default(900),
+  /**
+   * Comma-separated addresses or CIDR ranges of reverse proxies whose X-Forwarded-For is believed.
+   * Empty (the default): the client address is the connection's own and forwarding headers are ignored.
+   */
+  TRUSTED_PROXIES: z
+    .string()
+    .default("")
+    .transform((value) => value.split(",").map((entry) => entry.trim()).filter((entry) => entry !== "")),
   /** Fit jobs one worker process runs at once. */
   WORKER_FIT_CONCURRENCY: z.coerce.number().int().min(1).max(32).default(2),
   /** How often a worker runs pg-boss maintenance (returns expired jobs of dead workers), seconds. */
@@ -36,8 +48,8 @@ const envSchema = z.object({
 
 export type Env = z.infer<typeof envSchema>;
 
-function parseEnv(): Env {
-  const parsed = envSchema.safeParse(process.env);
+function parseOrExplain<S extends z.ZodType>(schema: S): z.output<S> {
+  const parsed = schema.safeParse(process.env);
   if (!parsed.success) {
     const lines = parsed.error.issues.map((issue) => `  ${issue.path.join(".")}: ${issue.message}`);
     throw new Error(`Invalid environment:\n${lines.join("\n")}\nSee .env.example.`);
@@ -45,4 +57,26 @@ function parseEnv(): Env {
   return parsed.data;
 }
 
-export const env: Env = parseEnv();
+let parsedEnv: Env | undefined;
+
+/**
+ * The configuration, parsed and checked on first use (every process touches it while starting, so a bad
+ * variable still stops it at once). Lazy so that the mail sink can import `parseMailSinkEnv` alone.
+ */
+export const env: Env = new Proxy({} as Env, {
+  get: (_target, key) => (parsedEnv ??= parseOrExplain(envSchema))[key as keyof Env],
+});
+
+const port = z.coerce.number().int().min(1).max(65535);
+const mailSinkEnvSchema = z.object({
+  /** Port the development mail sink accepts SMTP on (127.0.0.1). */
+  MAIL_SINK_SMTP_PORT: port.default(2525),
+  /** Port the sink lists its messages on over HTTP (127.0.0.1). */
+  MAIL_SINK_HTTP_PORT: port.default(2526),
+});
+export type MailSinkEnv = z.infer<typeof mailSinkEnvSchema>;
+
+/** The mail sink's ports; the sink process needs nothing else, so it calls this instead of reading `env`. */
+export function parseMailSinkEnv(): MailSinkEnv {
+  return parseOrExplain(mailSinkEnvSchema);
+}

@@ -79,6 +79,6 @@ for _ in $(seq 1 90); do
 done
 [ -n "$healthy" ] || die "the app did not report healthy at http://127.0.0.1:$PORT/api/health within 90 s"
 
-node_modules/.bin/tsx scripts/print-welcome.ts
+node_modules/.bin/tsx scripts/print-welcome.ts "$SEED_DEMO"
 # Stop everything as soon as any one process ends (or on Ctrl-C, through the traps).
 wait -n "${children[@]}" || true

@@ -4,6 +4,7 @@ import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState, type FormEvent } from "react";
 import { authClient } from "@/lib/auth/client";
+import { userNameMaxLength } from "@/lib/auth/user-name";
 import { Notice, SubmitButton, TextField } from "@/components/ui";
 import { describeAuthError, type AuthErrorDisplay } from "./auth-error";
 import { authPageHref } from "./safe-next-path";
@@ -50,7 +51,7 @@ export function SignUpForm({ next, passwordMinLength }: SignUpFormProps) {
         name="name"
         autoComplete="name"
         required
-        maxLength={120}
+        maxLength={userNameMaxLength}
         hint="Shown to the people you work with in a workspace."
         errors={errorsFor("name")}
       />

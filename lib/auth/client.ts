@@ -1,8 +1,7 @@
-import { organizationClient } from "better-auth/client/plugins";
 import { createAuthClient } from "better-auth/react";
-import { ac, roles } from "./roles";
 
-/** Browser-side better-auth client; talks to /api/auth/* on the page's own origin. */
-export const authClient = createAuthClient({
-  plugins: [organizationClient({ ac, roles })],
-});
+/**
+ * Browser-side better-auth client for sign-up, sign-in, sign-out and password reset; talks to
+ * /api/auth/* on the page's own origin. Workspaces go through our own actions, not the plugin's client.
+ */
+export const authClient = createAuthClient();

@@ -2,9 +2,11 @@ import "server-only";
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import type { WorkspaceRole } from "@/lib/auth/roles";
+import { env } from "@/lib/env";
 import { AppError, errorBody, toAppError } from "./errors";
 import { parseInput } from "./parse-input";
 import type { Principal } from "./principal";
+import { readBodyCapped } from "./read-body";
 import { authorizeWorkspace, requirePrincipal, type WorkspaceAccess } from "./workspace-access";
 
 /** Next passes the dynamic segments of the route; every workspace route has `slug`, nested ones more. */
@@ -14,13 +16,30 @@ type WorkspaceRouteContext = { params: Promise<{ slug: string } & Record<string,
 const maxJsonBytes = 64 * 1024;
 
 async function readJson(request: Request): Promise<unknown> {
-  const text = await request.text();
-  if (text.length > maxJsonBytes) throw new AppError("bad_request", "The request body is too large.");
+  // A JSON route never reads a form post: a cross-site <form enctype="text/plain"> cannot pose as JSON.
+  if (!/^application\/json\s*(;|$)/i.test(request.headers.get("content-type") ?? "")) {
+    throw new AppError("unsupported_media_type");
+  }
+  const text = new TextDecoder().decode(await readBodyCapped(request, maxJsonBytes));
   if (text.trim() === "") throw new AppError("invalid_json", "The request body is empty; send a JSON object.");
   try {
     return JSON.parse(text);
   } catch {
     throw new AppError("invalid_json");
+  }
+}
+
+const safeMethods = new Set(["GET", "HEAD", "OPTIONS"]);
+
+/**
+ * A cookie-authenticated change must come from our own pages: browsers send Origin on every non-GET
+ * request, so one from another site (or none at all) is refused, as better-auth does under /api/auth.
+ * API keys are not sent automatically by browsers, so their requests need no such check.
+ */
+function requireSameOrigin(request: Request, principal: Principal): void {
+  if (principal.via !== "session" || safeMethods.has(request.method)) return;
+  if (request.headers.get("origin") !== new URL(env.APP_URL).origin) {
+    throw new AppError("forbidden", "This request did not come from Bandwright's own pages.");
   }
 }
 
@@ -55,6 +74,7 @@ export function userRoute<S extends z.ZodType | undefined = undefined>(
   return async (request: Request): Promise<Response> => {
     try {
       const principal = await requirePrincipal(request.headers);
+      requireSameOrigin(request, principal);
       const input = await parseBody(request, options.input as S);
       return toResponse(await handler({ principal, input, request }));
     } catch (thrown) {
@@ -82,6 +102,7 @@ export function workspaceRoute<S extends z.ZodType | undefined = undefined>(
       const principal = await requirePrincipal(request.headers);
       const params = await context.params;
       const access = await authorizeWorkspace(principal, params.slug, options.minimumRole);
+      requireSameOrigin(request, principal);
       const input = await parseBody(request, options.input as S);
       return toResponse(await handler({ access, input, request, params }));
     } catch (thrown) {

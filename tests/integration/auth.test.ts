@@ -54,6 +54,21 @@ describe("e-mail and password accounts", () => {
     expect((await new TestClient().signIn(email, testPassword)).status).toBe(200);
   });
 
+  it("limits failed sign-ins per account, whichever addresses they come from", async () => {
+    const email = await new TestClient().newUser("guessed");
+    // AUTH_ACCOUNT_RATE_LIMIT_MAX = 20 failures per 15 minutes (lib/env.ts); every attempt from a new address.
+    for (let attempt = 0; attempt < 20; attempt++) {
+      expect((await new TestClient().signIn(email, `guess-${attempt}`)).status).toBe(401);
+    }
+    const blocked = await new TestClient().signIn(email, testPassword);
+    expect(blocked.status).toBe(429);
+    expect(blocked.body).toMatchObject({ error: { code: "rate_limited", message: expect.stringMatching(/this account/) } });
+    // Another account is not affected.
+    const other = new TestClient();
+    const otherEmail = await other.newUser("unguessed");
+    expect((await new TestClient().signIn(otherEmail)).status).toBe(200);
+  });
+
   it("resets a password through the e-mailed link", async () => {
     const client = new TestClient();
     const email = await client.newUser("forgetful");

@@ -80,3 +80,44 @@ describe("POST /api/workspaces/{slug}/invitations refuses bad input", () => {
     expect(await pendingCount()).toBe(before);
   });
 });
+
+describe("request bodies and origins", () => {
+  const bigName = (kib: number) => JSON.stringify({ name: "z".repeat(kib * 1024) });
+
+  it("refuses a 100 KiB body with 413 before reading it into a workspace", async () => {
+    const before = await workspaceCount();
+    const response = await owner.request("POST", "/api/workspaces", bigName(100));
+    expect(response.status).toBe(413);
+    expect(response.body).toMatchObject({ error: { code: "payload_too_large", message: expect.stringMatching(/larger than 64 KiB/) } });
+    expect(await workspaceCount()).toBe(before);
+  });
+
+  it("refuses a 100 KiB body on better-auth's sign-up with 413, creating no account", async () => {
+    const email = testEmail("bulky");
+    const response = await new TestClient().request(
+      "POST",
+      "/api/auth/sign-up/email",
+      JSON.stringify({ email, password: "correct-horse-battery", name: "z".repeat(100 * 1024) }),
+    );
+    expect(response.status).toBe(413);
+    expect(await getUserByEmail(email)).toBeNull();
+  });
+
+  it("refuses a sign-up name over 120 characters, creating no account", async () => {
+    const email = testEmail("longname");
+    const response = await new TestClient().signUp({ name: "n".repeat(121), email });
+    expect(response.status).toBe(400);
+    expect(JSON.stringify(response.body)).toContain("Name must be 1 to 120 characters");
+    expect(await getUserByEmail(email)).toBeNull();
+  });
+
+  it("refuses a form-encoded body posing as JSON (415) and a cross-site Origin (403)", async () => {
+    const before = await workspaceCount();
+    const plain = await owner.request("POST", "/api/workspaces", '{"name":"Forged Lab"}', { "content-type": "text/plain" });
+    expect(plain.status).toBe(415);
+    const foreign = await owner.request("POST", "/api/workspaces", { name: "Forged Lab" }, { origin: "https://elsewhere.example" });
+    expect(foreign.status).toBe(403);
+    expect(foreign.body).toMatchObject({ error: { code: "forbidden" } });
+    expect(await workspaceCount()).toBe(before);
+  });
+});

@@ -1,12 +1,19 @@
-import { randomInt, randomUUID } from "node:crypto";
+import { randomUUID } from "node:crypto";
 import { inject } from "vitest";
 
 /** A response as the tests look at it. */
 export type TestResponse = { status: number; body: unknown; headers: Headers };
 
-/** A fresh address in TEST-NET-2 (RFC 5737), so each simulated client has its own rate-limit bucket. */
+let clientsMade = 0;
+
+/**
+ * A fresh address in the IPv6 documentation range 2001:db8::/32 (RFC 3849), so each simulated client has
+ * its own rate-limit bucket. better-auth groups IPv6 clients by /64, so the process id (test files run in
+ * separate processes) and a counter go into the /64 prefix itself: no two clients of one run share it.
+ */
 export function testClientIp(): string {
-  return `198.51.100.${randomInt(1, 255)}`;
+  clientsMade += 1;
+  return `2001:db8:${(process.pid & 0xffff).toString(16)}:${clientsMade.toString(16)}::1`;
 }
 
 /** A unique address on the reserved .example domain (RFC 2606). */
@@ -18,7 +25,7 @@ export const testPassword = "correct-horse-battery";
 
 /**
  * One simulated browser: keeps its cookies, sends the Origin better-auth expects and its own
- * X-Forwarded-For address. Requests go to inject("baseUrl") (provided by tests/support/global-setup.ts).
+ * X-Forwarded-For address (believed because the test app trusts 127.0.0.1 as a proxy; global-setup.ts). Requests go to inject("baseUrl") (provided by tests/support/global-setup.ts).
  */
 export class TestClient {
   private readonly cookies = new Map<string, string>();
@@ -37,12 +44,16 @@ export class TestClient {
     return new TestClient(testClientIp(), key);
   }
 
-  /** `body` as a string is sent verbatim (for malformed JSON); anything else is JSON-encoded. */
-  async request(method: string, path: string, body?: unknown): Promise<TestResponse> {
+  /**
+   * `body` as a string is sent verbatim (for malformed JSON); anything else is JSON-encoded. `extraHeaders`
+   * replace the defaults (e.g. another Origin or Content-Type).
+   */
+  async request(method: string, path: string, body?: unknown, extraHeaders: Record<string, string> = {}): Promise<TestResponse> {
     const headers: Record<string, string> = { origin: this.baseUrl, "x-forwarded-for": this.ip };
     if (this.cookies.size > 0) headers.cookie = [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; ");
     if (this.bearer) headers.authorization = `Bearer ${this.bearer}`;
     if (body !== undefined) headers["content-type"] = "application/json";
+    Object.assign(headers, extraHeaders);
     const response = await fetch(new URL(path, this.baseUrl), {
       method,
       headers,

@@ -29,10 +29,24 @@ function start(command: string, args: string[], env: NodeJS.ProcessEnv, label: s
   return child;
 }
 
-async function waitForHealth(baseUrl: string, timeoutMs: number): Promise<void> {
+/** Rejects as soon as any child exits: a crashed worker or app fails the start at once, not after 90 s. */
+function firstExit(children: { child: ChildProcess; label: string }[]): { promise: Promise<never>; cancel: () => void } {
+  const listeners: (() => void)[] = [];
+  const promise = new Promise<never>((_resolve, reject) => {
+    for (const { child, label } of children) {
+      const onExit = (code: number | null, signal: NodeJS.Signals | null) =>
+        reject(new Error(`The test ${label} exited during start-up (code ${code}, signal ${signal}); its messages are above.`));
+      child.once("exit", onExit);
+      listeners.push(() => child.off("exit", onExit));
+    }
+  });
+  return { promise, cancel: () => listeners.forEach((remove) => remove()) };
+}
+
+async function waitForHealth(baseUrl: string, timeoutMs: number, stopped: { done: boolean }): Promise<void> {
   const deadline = Date.now() + timeoutMs;
   let last = "no answer";
-  while (Date.now() < deadline) {
+  while (Date.now() < deadline && !stopped.done) {
     try {
       const response = await fetch(`${baseUrl}/api/health`);
       if (response.ok) return;
@@ -42,6 +56,7 @@ async function waitForHealth(baseUrl: string, timeoutMs: number): Promise<void> 
     }
     await new Promise((resolve) => setTimeout(resolve, 500));
   }
+  if (stopped.done) return;
   throw new Error(`The test app at ${baseUrl} did not become healthy: ${last}`);
 }
 
@@ -61,14 +76,29 @@ async function startStack(): Promise<Stack> {
     MAIL_SINK_URL: mailSinkUrl,
     MAIL_SINK_SMTP_PORT: String(smtpPort),
     MAIL_SINK_HTTP_PORT: String(sinkHttpPort),
+    // The tests connect from 127.0.0.1 and act as many clients through X-Forwarded-For (tests/support/
+    // client.ts), so this one proxy is trusted here; production trusts none unless configured.
+    TRUSTED_PROXIES: "127.0.0.1",
   };
-  const children = [
-    start("node_modules/.bin/tsx", ["scripts/mail-sink.ts"], env, "mail-sink"),
-    start("node_modules/.bin/tsx", ["workers/main.ts"], env, "worker"),
-    start("node", ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(appPort)], env, "app"),
+  const labelled = [
+    { label: "mail-sink", child: start("node_modules/.bin/tsx", ["scripts/mail-sink.ts"], env, "mail-sink") },
+    { label: "worker", child: start("node_modules/.bin/tsx", ["workers/main.ts"], env, "worker") },
+    { label: "app", child: start("node_modules/.bin/tsx", ["scripts/serve-app.ts", String(appPort)], env, "app") },
   ];
-  await waitForHealth(baseUrl, 90_000);
-  return { baseUrl, mailSinkUrl, children, users: 0 };
+  const stack: Stack = { baseUrl, mailSinkUrl, children: labelled.map(({ child }) => child), users: 0 };
+  const exited = firstExit(labelled);
+  const stopped = { done: false };
+  try {
+    await Promise.race([waitForHealth(baseUrl, 90_000, stopped), exited.promise]);
+    return stack;
+  } catch (error) {
+    // Never leave the app, worker or sink running after a failed start.
+    await stopStack(stack);
+    throw error;
+  } finally {
+    stopped.done = true;
+    exited.cancel();
+  }
 }
 
 async function stopStack(stack: Stack): Promise<void> {

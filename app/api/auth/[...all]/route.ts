@@ -1,4 +1,1 @@
-import { toNextJsHandler } from "better-auth/next-js";
-import { auth } from "@/lib/auth/server";
-
-export const { GET, POST } = toNextJsHandler(auth);
+export { GET, POST } from "@/lib/server/auth-handler";
