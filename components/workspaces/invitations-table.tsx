@@ -1,20 +1,17 @@
 "use client";
 
+import { useMemo } from "react";
 import { formatDateTime } from "@/components/format";
 import { DataTable, dataColumnHelper, RoleBadge } from "@/components/ui";
-import type { WorkspaceRole } from "@/lib/auth/roles";
+import type { PendingInvitationListRow } from "@/db/queries/workspaces";
+import { CancelInvitationButton } from "./cancel-invitation-button";
 
 /** One invitation still waiting for an answer. */
-export interface PendingInvitationRow {
-  id: string;
-  email: string;
-  role: WorkspaceRole;
-  expiresAt: Date;
-}
+export type PendingInvitationRow = PendingInvitationListRow;
 
 const helper = dataColumnHelper<PendingInvitationRow>();
 
-const columns = helper.columns([
+const baseColumns = helper.columns([
   helper.accessor("email", { header: "E-mail", sortFn: "text" }),
   helper.accessor("role", { header: "Role", cell: (info) => <RoleBadge role={info.getValue()} />, sortFn: "text" }),
   helper.accessor("expiresAt", {
@@ -25,8 +22,20 @@ const columns = helper.columns([
   }),
 ]);
 
-/** Owner-only list of invitations that have not been accepted yet. */
-export function InvitationsTable({ invitations }: { invitations: PendingInvitationRow[] }) {
+/** Owner-only list of invitations that have not been accepted yet, each with a "Withdraw" control. */
+export function InvitationsTable({ slug, invitations }: { slug: string; invitations: PendingInvitationRow[] }) {
+  const columns = useMemo(
+    () => [
+      ...baseColumns,
+      helper.display({
+        id: "actions",
+        header: "",
+        meta: { srHeader: "Actions", alignEnd: true },
+        cell: ({ row }) => <CancelInvitationButton slug={slug} invitationId={row.original.id} email={row.original.email} />,
+      }),
+    ],
+    [slug],
+  );
   return (
     <DataTable
       columns={columns}

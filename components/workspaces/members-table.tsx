@@ -3,17 +3,11 @@
 import { useMemo } from "react";
 import { formatDate } from "@/components/format";
 import { DataTable, dataColumnHelper, RoleBadge } from "@/components/ui";
-import type { WorkspaceRole } from "@/lib/auth/roles";
+import type { MemberListRow } from "@/db/queries/workspaces";
 import { MemberActions } from "./member-actions";
 
 /** One member as the members page shows them. */
-export interface MemberRow {
-  memberId: string;
-  name: string;
-  email: string;
-  role: WorkspaceRole;
-  joinedAt: Date;
-}
+export type MemberRow = MemberListRow;
 
 const helper = dataColumnHelper<MemberRow>();
 

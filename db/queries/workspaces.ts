@@ -1,6 +1,6 @@
 import { and, asc, eq, gt } from "drizzle-orm";
 import { db } from "@/db/client";
-import { invitation, member, organization, user } from "@/db/schema";
+import { invitation, member, organization, user, type Workspace } from "@/db/schema";
 import { type WorkspaceRole, isWorkspaceRole } from "@/lib/auth/roles";
 
 // Roles are stored as text by better-auth; only our three are ever written, so anything else is corruption.
@@ -10,7 +10,7 @@ function storedRole(value: string | null): WorkspaceRole {
 }
 
 /** A workspace row as the web layer uses it. */
-export type WorkspaceSummary = { id: string; slug: string; name: string };
+export type WorkspaceSummary = Pick<Workspace, "id" | "slug" | "name">;
 
 export async function getWorkspaceBySlug(slug: string): Promise<WorkspaceSummary | null> {
   const rows = await db
@@ -65,17 +65,6 @@ export async function listMembers(workspaceId: string) {
     .then((rows) => rows.map((row) => ({ ...row, role: storedRole(row.role) })));
 }
 
-/** A member of one workspace by member id (null when the id belongs to another workspace). */
-export async function getMemberInWorkspace(params: { workspaceId: string; memberId: string }) {
-  const rows = await db
-    .select({ memberId: member.id, userId: member.userId, role: member.role })
-    .from(member)
-    .where(and(eq(member.organizationId, params.workspaceId), eq(member.id, params.memberId)))
-    .limit(1);
-  const row = rows[0];
-  return row ? { ...row, role: storedRole(row.role) } : null;
-}
-
 /** Invitations still waiting for an answer and not yet expired. */
 export async function listPendingInvitations(workspaceId: string) {
   return db
@@ -113,3 +102,8 @@ export async function getInvitation(id: string) {
   const row = rows[0];
   return row ? { ...row, role: storedRole(row.role) } : null;
 }
+
+/** One row of listMembers (the members table's row type). */
+export type MemberListRow = Awaited<ReturnType<typeof listMembers>>[number];
+/** One row of listPendingInvitations (the invitations table's row type). */
+export type PendingInvitationListRow = Awaited<ReturnType<typeof listPendingInvitations>>[number];

@@ -43,6 +43,12 @@ export const removeMemberInput = z.object({
 });
 export type RemoveMemberInput = z.infer<typeof removeMemberInput>;
 
+/** Withdrawing a pending invitation (owners; the members page and DELETE …/invitations/{id}). */
+export const cancelInvitationInput = z.object({
+  invitationId: z.string({ error: "Invitation is required." }).min(1, { error: "Invitation is required." }),
+});
+export type CancelInvitationInput = z.infer<typeof cancelInvitationInput>;
+
 export const acceptInvitationInput = z.object({
   invitationId: z.string({ error: "Invitation is required." }).min(1, { error: "Invitation is required." }),
 });

@@ -7,6 +7,7 @@ import { getInvitation } from "@/db/queries/workspaces";
 import { auth } from "@/lib/auth/server";
 import {
   acceptInvitationInput,
+  cancelInvitationInput,
   changeMemberRoleInput,
   createWorkspaceInput,
   inviteMemberInput,
@@ -14,7 +15,7 @@ import {
 } from "@/lib/schemas/workspaces";
 import { userAction, workspaceAction } from "../action";
 import { AppError } from "../errors";
-import { changeMemberRole, createWorkspace, inviteMember, removeMember } from "../workspaces";
+import { cancelInvitation, changeMemberRole, createWorkspace, inviteMember, removeMember } from "../workspaces";
 
 const membersPath = (slug: string) => `/w/${slug}/members`;
 
@@ -48,6 +49,15 @@ export const removeMemberAction = workspaceAction(
     await removeMember(access, input);
     revalidatePath(membersPath(access.workspace.slug));
     return { ok: true, message: "Member removed." };
+  },
+);
+
+export const cancelInvitationAction = workspaceAction(
+  { input: cancelInvitationInput, minimumRole: "owner" },
+  async ({ access, input }) => {
+    await cancelInvitation(access, input);
+    revalidatePath(membersPath(access.workspace.slug));
+    return { ok: true, message: "Invitation withdrawn." };
   },
 );
 

@@ -11,7 +11,7 @@ export const metadata: Metadata = { title: "Members" };
 
 export default async function MembersPage({ params }: { params: Promise<{ slug: string }> }) {
   const { slug } = await params;
-  const { workspace, role, memberId } = await requireWorkspaceMember(slug, "viewer");
+  const { workspace, role, memberId } = await requireWorkspaceMember(slug, "viewer", `/w/${encodeURIComponent(slug)}/members`);
   const isOwner = role === "owner";
   const [members, invitations] = await Promise.all([
     listMembers(workspace.id),
@@ -39,7 +39,7 @@ export default async function MembersPage({ params }: { params: Promise<{ slug: 
         </Panel>
         {isOwner ? (
           <Panel title="Pending invitations" flush>
-            <InvitationsTable invitations={invitations} />
+            <InvitationsTable slug={workspace.slug} invitations={invitations} />
           </Panel>
         ) : null}
       </div>
