@@ -5,6 +5,8 @@ const nextConfig: NextConfig = {
   distDir: process.env.NEXT_DIST_DIR ?? ".next",
   reactStrictMode: true,
   poweredByHeader: false,
+  // forbidden() gives a member below a page's role a real 403 (lib/server/workspace-access.ts).
+  experimental: { authInterrupts: true },
   // Server-only packages with native or Node-specific code stay out of the bundle.
   serverExternalPackages: ["pg-boss", "nodemailer", "smtp-server", "postgres"],
 };

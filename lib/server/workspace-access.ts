@@ -1,6 +1,6 @@
 import "server-only";
 import { headers } from "next/headers";
-import { notFound } from "next/navigation";
+import { forbidden, notFound } from "next/navigation";
 import { getMembership, getWorkspaceBySlug, type WorkspaceSummary } from "@/db/queries/workspaces";
 import { hasRole, type WorkspaceRole } from "@/lib/auth/roles";
 import { workspaceSlugSchema } from "@/lib/schemas/workspaces";
@@ -32,8 +32,9 @@ export async function authorizeWorkspace(
 
 /**
  * For pages: sends a signed-out visitor to sign-in (and back to `returnTo` afterwards, by default the
- * workspace home), calls notFound() for a non-member, and throws AppError("forbidden") for a member below
- * `minimumRole` (the segment's error boundary shows it).
+ * workspace home; pass the page's own path), calls notFound() for a non-member (404) and forbidden() for a
+ * member below `minimumRole` (403, app/(app)/w/[slug]/forbidden.tsx). The statuses are real only when no
+ * loading.tsx sits above the page (it would start streaming first).
  */
 export async function requireWorkspaceMember(
   slug: string,
@@ -45,6 +46,7 @@ export async function requireWorkspaceMember(
     return await authorizeWorkspace({ user, via: "session" }, slug, minimumRole);
   } catch (error) {
     if (error instanceof AppError && error.code === "not_found") notFound();
+    if (error instanceof AppError && error.code === "forbidden") forbidden();
     throw error;
   }
 }

@@ -32,24 +32,18 @@ export function launchChromium(): Promise<Browser> {
   });
 }
 
-// The workspace's Datasets and Fits sections are linked from its navigation now, but their pages come
-// with later issues; Next's link prefetching asks for them and gets 404. Remove once those pages exist.
-function isSectionBuiltLater(url: string): boolean {
-  return URL.canParse(url) && /^\/w\/[a-z0-9-]+\/(datasets|fits)$/.test(new URL(url).pathname);
-}
-
 /** A fresh page (own cookies) that records console errors, uncaught page errors and failed requests. */
 export async function newIsolatedPage(browser: Browser, problems: string[]): Promise<Page> {
   const context = await browser.newContext({ viewport: { width: 1280, height: 860 }, baseURL: baseUrl() });
   const page = await context.newPage();
   page.on("console", (message) => {
-    if (message.type() === "error" && !isSectionBuiltLater(message.location().url)) {
+    if (message.type() === "error") {
       problems.push(`console: ${message.text()} (${message.location().url})`);
     }
   });
   page.on("pageerror", (error) => problems.push(`page error: ${error.message}`));
   page.on("response", (response) => {
-    if (response.status() >= 400 && !isSectionBuiltLater(response.url())) {
+    if (response.status() >= 400) {
       problems.push(`HTTP ${response.status()}: ${response.url()}`);
     }
   });

@@ -78,7 +78,7 @@ describe("sign-up, workspace, invitation and viewer access in the browser", () =
     await page.waitForURL(/\/w\/[a-z0-9-]+$/);
     workspacePath = new URL(page.url()).pathname;
     await page.getByText("No datasets yet").waitFor();
-    expect(await page.getByRole("link", { name: "Upload a dataset" }).getAttribute("href")).toBe(`${workspacePath}/datasets`);
+    expect(await page.getByRole("link", { name: "Upload a dataset" }).getAttribute("href")).toBe(`${workspacePath}/datasets/new`);
     expect(await page.getByRole("link", { name: "Start a fit" }).getAttribute("href")).toBe(`${workspacePath}/fits`);
     await screenshot(page, "04-workspace-home-owner");
 
@@ -89,7 +89,7 @@ describe("sign-up, workspace, invitation and viewer access in the browser", () =
     await inviteForm.getByLabel("Role").selectOption("viewer");
     await inviteForm.getByRole("button", { name: "Send invitation" }).click();
     await page.getByText(`Invitation sent to ${colleague.email}.`).waitFor();
-    await page.getByRole("cell", { name: colleague.email }).waitFor();
+    await page.getByRole("cell", { name: colleague.email, exact: true }).waitFor();
     await screenshot(page, "05-members-owner");
     await page.context().close();
   });
@@ -127,13 +127,12 @@ describe("sign-up, workspace, invitation and viewer access in the browser", () =
   it("lets the owner sign in again, promote the colleague to editor and then remove them", async () => {
     const page = await newIsolatedPage(browser, problems);
     await page.goto(`${workspacePath}/members`);
-    // Signed out: the guard sends the owner to sign in and back.
+    // Signed out: the guard sends the owner to sign in and back to the members page.
     await page.waitForURL("**/sign-in?next=*");
     await page.getByLabel("E-mail").fill(owner.email);
     await page.getByLabel("Password").fill(owner.password);
     await page.getByRole("button", { name: "Sign in" }).click();
-    await page.waitForURL(`**${workspacePath}`);
-    await page.goto(`${workspacePath}/members`);
+    await page.waitForURL(`**${workspacePath}/members`);
 
     const colleagueRow = page.getByRole("row", { name: new RegExp(colleague.email.replace(/[.+]/g, "\\$&")) });
     await colleagueRow.getByLabel(`Role of ${colleague.name}`).selectOption("editor");
@@ -144,7 +143,7 @@ describe("sign-up, workspace, invitation and viewer access in the browser", () =
 
     page.once("dialog", (dialog) => void dialog.accept());
     await colleagueRow.getByRole("button", { name: `Remove ${colleague.name}` }).click();
-    await page.getByRole("cell", { name: colleague.email }).waitFor({ state: "detached" });
+    await page.getByRole("cell", { name: colleague.email, exact: true }).waitFor({ state: "detached" });
     expect(await page.getByRole("cell", { name: owner.email }).count()).toBe(1);
     await page.context().close();
   });
