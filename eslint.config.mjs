@@ -4,7 +4,8 @@ import nextTypescript from "eslint-config-next/typescript";
 const config = [
   ...nextCoreWebVitals,
   ...nextTypescript,
-  { ignores: [".next/**", ".data/**", "node_modules/**", "test-results/**", "drizzle/**", "next-env.d.ts"] },
+  // Flat config does not read .gitignore: every build folder (.next, .next-test, .next-<name>) is skipped.
+  { ignores: [".next*/**", ".data/**", "node_modules/**", "test-results/**", "tests/browser/screenshots/**", "drizzle/**", "next-env.d.ts"] },
   {
     // The numerical core stays pure (DEVELOPERS.md): no framework, no database, no environment.
     files: ["lib/tb/**", "lib/linalg/**", "lib/fit/**", "lib/datasets/**", "lib/units/**"],

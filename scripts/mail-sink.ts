@@ -1,23 +1,18 @@
 import { randomUUID } from "node:crypto";
 import { createServer } from "node:http";
 import { SMTPServer } from "smtp-server";
-import { z } from "zod";
+import type { MailSinkMessage } from "@/lib/email/sink-message";
+import { parseMailSinkEnv } from "@/lib/env";
 import { parseMail } from "./lib/mime";
 
 // Development and test mail sink: accepts every message over plain SMTP on 127.0.0.1, keeps it in memory,
 // and lists the messages as JSON over HTTP (GET /messages, DELETE /messages). Never relays anything.
 
-const portsSchema = z.object({
-  MAIL_SINK_SMTP_PORT: z.coerce.number().int().min(1).max(65535),
-  MAIL_SINK_HTTP_PORT: z.coerce.number().int().min(1).max(65535),
-});
-const ports = portsSchema.parse(process.env);
-
-type StoredMessage = { id: string; to: string; subject: string; text: string; html?: string; receivedAt: string };
+const ports = parseMailSinkEnv();
 
 /** Oldest messages are dropped beyond this many (the sink runs for days during development). */
 const maxMessages = 500;
-const messages: StoredMessage[] = [];
+const messages: MailSinkMessage[] = [];
 
 const smtp = new SMTPServer({
   authOptional: true,

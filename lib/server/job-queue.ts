@@ -36,7 +36,7 @@ const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
  * @param timeoutMs - how long to wait for an answer, milliseconds (the worker polls every 0.5 s)
  * @returns true when a worker answered in time
  */
-export async function checkWorkerHealth(timeoutMs = 5000): Promise<boolean> {
+async function probeWorker(timeoutMs: number): Promise<boolean> {
   const boss = await getQueue();
   const jobId = await boss.send(healthQueue.name, { askedAt: new Date().toISOString() });
   if (!jobId) return false;
@@ -48,4 +48,24 @@ export async function checkWorkerHealth(timeoutMs = 5000): Promise<boolean> {
     await sleep(150);
   }
   return false;
+}
+
+/** How long one worker answer is reused, milliseconds: health checks cannot flood the queue's small pool. */
+const healthCacheMs = 5000;
+let lastProbe: { at: number; answer: Promise<boolean> } | undefined;
+
+/**
+ * Whether a worker answers a health job. Concurrent callers share one probe, and its answer is reused for
+ * 5 s, so a burst of anonymous /api/health requests costs one job, not one each.
+ * @param timeoutMs - how long a probe waits for the worker, milliseconds
+ */
+export function checkWorkerHealth(timeoutMs = 5000): Promise<boolean> {
+  if (!lastProbe || Date.now() - lastProbe.at > healthCacheMs) {
+    const answer = probeWorker(timeoutMs).catch((error: unknown) => {
+      lastProbe = undefined; // an error is not cached: the next caller tries again
+      throw error;
+    });
+    lastProbe = { at: Date.now(), answer };
+  }
+  return lastProbe.answer;
 }

@@ -1,15 +1,7 @@
 import { inject } from "vitest";
-import { z } from "zod";
+import { mailSinkMessageListSchema, type MailSinkMessage } from "@/lib/email/sink-message";
 
-const messageSchema = z.object({
-  id: z.string(),
-  to: z.string(),
-  subject: z.string(),
-  text: z.string(),
-  html: z.string().optional(),
-  receivedAt: z.string(),
-});
-export type CapturedMail = z.infer<typeof messageSchema>;
+export type CapturedMail = MailSinkMessage;
 
 function sinkUrl(): string {
   return inject("mailSinkUrl");
@@ -18,7 +10,7 @@ function sinkUrl(): string {
 /** Every message the test sink holds, newest first. */
 export async function listMail(): Promise<CapturedMail[]> {
   const response = await fetch(`${sinkUrl()}/messages`);
-  return z.array(messageSchema).parse(await response.json());
+  return mailSinkMessageListSchema.parse(await response.json());
 }
 
 /** Waits for the newest message addressed to `to` (SMTP delivery is asynchronous). */

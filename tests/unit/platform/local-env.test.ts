@@ -17,7 +17,7 @@ function run(envLocal: string | null, env: Record<string, string>, print: string
   folders.push(folder);
   if (envLocal !== null) writeFileSync(join(folder, ".env.local"), envLocal);
   const script = `. "${common}"; ensure_local_env >/dev/null; ${print.map((name) => `printf '%s\\n' "$${name}"`).join("; ")}`;
-  const output = execFileSync("bash", ["--norc", "--noprofile", "-c", script], { cwd: folder, env: { PATH: process.env.PATH ?? "", ...env } as NodeJS.ProcessEnv, encoding: "utf8" });
+  const output = execFileSync("bash", ["--norc", "--noprofile", "-c", script], { cwd: folder, env: { PATH: process.env.PATH ?? "", NODE_ENV: "test", ...env }, encoding: "utf8" });
   const file = safeRead(join(folder, ".env.local"));
   return { values: output.trimEnd().split("\n"), file };
 }
