@@ -161,29 +161,29 @@ export const bccVectors = (a: number): Vec3[] => [
 /** Γ–X–W–K–Γ–L–U–W–L–K|U–X in the reduced coordinates of {@link fccVectors}. */
 export const FCC_PATH: TemplateDefinition["kPath"] = [
   { label: "Γ", reduced: [0, 0, 0] },
-  { label: "X", reduced: [0.5, 0.5, 0] },
+  { label: "X", reduced: [0, 0.5, 0.5] },
   { label: "W", reduced: [0.25, 0.5, 0.75] },
   { label: "K", reduced: [0.375, 0.375, 0.75] },
   { label: "Γ", reduced: [0, 0, 0] },
   { label: "L", reduced: [0.5, 0.5, 0.5] },
-  { label: "U", reduced: [0.625, 0.625, 0.25] },
+  { label: "U", reduced: [0.25, 0.625, 0.625] },
   { label: "W", reduced: [0.25, 0.5, 0.75] },
   { label: "L", reduced: [0.5, 0.5, 0.5] },
   { label: "K", reduced: [0.375, 0.375, 0.75] },
-  { label: "U", reduced: [0.625, 0.625, 0.25], jump: true },
-  { label: "X", reduced: [0.5, 0.5, 0] },
+  { label: "U", reduced: [0.25, 0.625, 0.625], jump: true },
+  { label: "X", reduced: [0, 0.5, 0.5] },
 ];
 
 /** Γ–H–N–Γ–P–H|P–N in the reduced coordinates of {@link bccVectors}. */
 export const BCC_PATH: TemplateDefinition["kPath"] = [
   { label: "Γ", reduced: [0, 0, 0] },
   { label: "H", reduced: [0.5, 0.5, -0.5] },
-  { label: "N", reduced: [0, 0, 0.5] },
+  { label: "N", reduced: [0, 0.5, 0] },
   { label: "Γ", reduced: [0, 0, 0] },
   { label: "P", reduced: [0.25, 0.25, 0.25] },
   { label: "H", reduced: [0.5, 0.5, -0.5] },
   { label: "P", reduced: [0.25, 0.25, 0.25], jump: true },
-  { label: "N", reduced: [0, 0, 0.5] },
+  { label: "N", reduced: [0, 0.5, 0] },
 ];
 
 export const cubicSimpleS = cubicS(
