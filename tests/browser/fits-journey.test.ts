@@ -25,12 +25,14 @@ describe("fit views in the browser", () => {
   let emails: { editor: string; viewer: string };
   let revisionPath = "";
   let slowDatasetId = "";
+  let datasetId = "";
   const problems: string[] = [];
 
   beforeAll(async () => {
     team = await createUploadTeam("Halvorsen Quantum Materials Lab");
     const uploaded = await upload(team, { name: FIXTURE, bytes: fixtureBytes(FIXTURE) }, fixtureMappings[FIXTURE]);
     expect(uploaded.status).toBe(201);
+    datasetId = (uploaded.body as { id: string }).id;
     const slow = await upload(team, { name: SLOW_FIXTURE, bytes: fixtureBytes(SLOW_FIXTURE), type: "text/tab-separated-values" }, fixtureMappings[SLOW_FIXTURE]);
     expect(slow.status).toBe(201);
     slowDatasetId = (slow.body as { id: string }).id;
@@ -85,7 +87,7 @@ describe("fit views in the browser", () => {
     await page.waitForURL("**/fits/new");
 
     await page.getByLabel("Fit name").fill("HQ-07 π bands");
-    await page.getByLabel("Dataset").selectOption({ index: 1 });
+    await page.getByLabel("Dataset").selectOption(datasetId);
     // The preview draws the template's bands over the data before anything is sent.
     await page.getByRole("img", { name: /Band energies of HQ-07/ }).waitFor();
     await page.getByLabel("Lattice constant (Å)").fill("2.4596");
