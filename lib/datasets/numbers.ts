@@ -21,10 +21,10 @@ export function parseDecimalCell(cell: string): number {
   let c = cell.charCodeAt(i);
   if (c === 43 || c === 45) i++;
   let digits = 0;
-  while (i < end && isDigit(cell.charCodeAt(i))) (i++, digits++);
+  for (; i < end && isDigit(cell.charCodeAt(i)); i++) digits++;
   if (i < end && cell.charCodeAt(i) === 46) {
     i++;
-    while (i < end && isDigit(cell.charCodeAt(i))) (i++, digits++);
+    for (; i < end && isDigit(cell.charCodeAt(i)); i++) digits++;
   }
   if (digits === 0) return NaN;
   let fortran = false;
@@ -36,7 +36,7 @@ export function parseDecimalCell(cell: string): number {
     c = cell.charCodeAt(i);
     if (c === 43 || c === 45) i++;
     let exponentDigits = 0;
-    while (i < end && isDigit(cell.charCodeAt(i))) (i++, exponentDigits++);
+    for (; i < end && isDigit(cell.charCodeAt(i)); i++) exponentDigits++;
     if (exponentDigits === 0 || i !== end) return NaN;
   }
   const text = start === 0 && end === cell.length ? cell : cell.slice(start, end);

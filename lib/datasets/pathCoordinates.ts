@@ -151,7 +151,10 @@ function collinearAxis(
   let farDistance = 0;
   for (const k of distinct) {
     const d = Math.hypot(kx[k] - kx[p0], ky[k] - ky[p0], kz[k] - kz[p0]);
-    if (d > farDistance) (far = k), (farDistance = d);
+    if (d > farDistance) {
+      far = k;
+      farDistance = d;
+    }
   }
   if (farDistance === 0) return { stationK: [p0], stationDistance: [0], length: 0 };
   let u: Vec3 = [(kx[far] - kx[p0]) / farDistance, (ky[far] - ky[p0]) / farDistance, (kz[far] - kz[p0]) / farDistance];
