@@ -90,14 +90,14 @@ export function BandChart({ points, lines, ticks, energyDomain, window, energyTi
             width={56}
           />
           {/* symbol area in px²: small dots, so that model lines stay visible where they lie on the data */}
-          <ZAxis range={[18, 18]} />
+          <ZAxis range={[28, 28]} />
           <Tooltip
             isAnimationActive={false}
             formatter={(value) => (typeof value === "number" ? `${value.toFixed(3).replace("-", "\u2212")}` : String(value))}
             labelFormatter={() => ""}
           />
           {points.map((series) => (
-            <Scatter key={series.key} name={series.label} data={series.points} fill={series.colour} shape="circle" fillOpacity={0.5} isAnimationActive={false} />
+            <Scatter key={series.key} name={series.label} data={series.points} fill={series.colour} shape="circle" fillOpacity={0.7} isAnimationActive={false} />
           ))}
           {lines.map((line) => (
             <Line
@@ -107,7 +107,7 @@ export function BandChart({ points, lines, ticks, energyDomain, window, energyTi
               dataKey="y"
               type="linear"
               stroke={line.colour}
-              strokeWidth={line.faint ? 1 : 1.5}
+              strokeWidth={line.faint ? 1 : 1.25}
               strokeOpacity={line.faint ? 0.6 : 1}
               strokeDasharray={line.dashed ? "6 4" : undefined}
               dot={false}
