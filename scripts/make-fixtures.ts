@@ -1,7 +1,7 @@
 import { readFileSync, writeFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import { z } from "zod";
-import { createSeededRandom } from "@/lib/linalg/seeded-random";
+import { createRandom } from "@/lib/linalg";
 import { buildTemplate, compileModel, computeBands, kPathVertices, templateKPath, type ModelDocument, type Vec3 } from "@/lib/tb";
 import { RYDBERG_IN_EV } from "@/lib/units";
 
@@ -30,12 +30,9 @@ const parametersSchema = z.object({
 });
 const parameters = parametersSchema.parse(JSON.parse(readFileSync(`${folder}parameters.json`, "utf8")));
 
-const uniform = createSeededRandom(parameters.seed);
-/** Standard normal deviate by the Box–Muller transform (Box & Muller 1958). */
-function gaussian(): number {
-  const u = 1 - uniform();
-  return Math.sqrt(-2 * Math.log(u)) * Math.cos(2 * Math.PI * uniform());
-}
+const random = createRandom(parameters.seed);
+const uniform = () => random.uniform();
+const gaussian = () => random.gaussian();
 
 function model(template: string, values: Record<string, number>): ModelDocument {
   return buildTemplate(template, { parameters: Object.fromEntries(Object.entries(values).map(([name, value]) => [name, { value }])) });

@@ -8,4 +8,4 @@ export {
 } from "./hermitian-eigen";
 export { type SymmetricEigenSolver, createSymmetricEigenSolver } from "./symmetric-eigen";
 export { type GeneralisedEigenSolver, createGeneralisedEigenSolver } from "./generalised-eigen";
-export { type RandomSource, createRandom, createSeededRandom } from "./seeded-random";
+export { type RandomSource, createRandom } from "./seeded-random";

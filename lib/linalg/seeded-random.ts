@@ -83,21 +83,3 @@ export function createRandom(seed: number): RandomSource {
     gaussian,
   };
 }
-
-
-/**
- * The mulberry32 stream (Tommy Ettinger's public-domain 32-bit generator), uniform in [0, 1). Kept only
- * because the committed example files of fixtures/ were drawn from it and scripts/make-fixtures.ts must
- * rewrite them byte for byte; new code uses {@link createRandom}.
- * @param seed - any 32-bit integer
- */
-export function createSeededRandom(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}

@@ -1,5 +1,5 @@
 import { beforeAll, describe, expect, it } from "vitest";
-import { createSeededRandom } from "@/lib/linalg/seeded-random";
+import { createRandom } from "@/lib/linalg";
 import { createUploadTeam, storedRows, upload, type Refusal, type UploadTeam } from "./helpers";
 
 // Issue 7 "What must be tested": every kind of bad file through the route against the real database is
@@ -84,8 +84,8 @@ describe("bad files through POST /api/workspaces/{slug}/datasets", () => {
   });
 
   it("refuses binary garbage", async () => {
-    const random = createSeededRandom(7);
-    const bytes = Uint8Array.from({ length: 4096 }, () => Math.floor(random() * 256));
+    const random = createRandom(7);
+    const bytes = Uint8Array.from({ length: 4096 }, () => Math.floor(random.uniform() * 256));
     bytes[10] = 0;
     await expectRefused(bytes, { row: expect.any(Number) as unknown as number, column: null });
   });
