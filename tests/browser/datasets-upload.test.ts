@@ -91,7 +91,12 @@ describe("dataset upload in the browser", () => {
 
   it("shows the server's row and column errors in the form for a bad file, storing nothing", async () => {
     await page.goto(`/w/${slug}/datasets/new`);
-    const bad = readFileSync(fixture, "utf8").replace("A,1.33493,0.85155,1,-1055.2,8.8", "A,1.33493,0.85155,1,-10x5.2,8.8");
+    // A typo in the energy (column 5) of line 7, the file's second data row.
+    const lines = readFileSync(fixture, "utf8").split("\n");
+    const fields = lines[6].split(",");
+    fields[4] = fields[4].replace(/^(-?\d)/, "$1x");
+    lines[6] = fields.join(",");
+    const bad = lines.join("\n");
     await page.setInputFiles('input[type="file"]', { name: "hq12-with-a-typo.csv", mimeType: "text/csv", buffer: Buffer.from(bad) });
     await page.getByRole("heading", { name: "Columns" }).waitFor();
     await page.getByRole("button", { name: "Upload dataset" }).click();
