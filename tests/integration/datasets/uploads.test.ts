@@ -28,16 +28,16 @@ describe("fixture uploads", () => {
     photoemission = response.body as Accepted;
     expect(photoemission).toMatchObject({ bandCount: 2, warnings: [] });
 
-    // The fixture's first data line (fixtures/hq12-photoemission-cuts.csv, line 6): A,1.32493,0.85155,1,-1091.6,20.9.
+    // The fixture's first data line (fixtures/hq12-photoemission-cuts.csv, line 6): A,1.32493,0.85155,1,-1083.9,20.4.
     const page = await pointsOf(photoemission.id, "pageSize=1");
     expect(page.total).toBe(photoemission.pointCount);
     const [first] = page.points;
     expect(first).toMatchObject({ row: 6, band: 1, label: "A", kz: 0 });
     expect(first.kx).toBeCloseTo(1.32493, 10);
     expect(first.ky).toBeCloseTo(0.85155, 10);
-    // 1 meV = 10⁻³ eV (SI prefix): σ 20.9 meV → 0.0209 eV, E −1091.6 meV → −1.0916 eV.
-    expect(first.sigma).toBeCloseTo(0.0209, 12);
-    expect(first.energy).toBeCloseTo(-1.0916, 12);
+    // 1 meV = 10⁻³ eV (SI prefix): σ 20.4 meV → 0.0204 eV, E −1083.9 meV → −1.0839 eV.
+    expect(first.sigma).toBeCloseTo(0.0204, 12);
+    expect(first.energy).toBeCloseTo(-1.0839, 12);
   });
 
   it("reports the dataset with its summary, hash and uploader", async () => {
@@ -84,9 +84,9 @@ describe("fixture uploads", () => {
     const tsv = "hq-s3-silicon-like-sp3s-star.tsv";
     const silicon = await upload(team, { name: tsv, bytes: fixtureBytes(tsv) }, fixtureMappings[tsv]);
     expect(silicon.body).toMatchObject({ pointCount: 1600, bandCount: 10 });
-    // Line 5 of the TSV: Γ, band 1, −0.918692 Ry; 1 Ry = 13.605693122994 eV (CODATA 2018, via lib/units).
+    // Line 5 of the TSV: Γ, band 1, −0.918989 Ry; 1 Ry = 13.605693122994 eV (CODATA 2018, via lib/units).
     const page = await pointsOf((silicon.body as Accepted).id, "pageSize=1");
-    expect(page.points[0].energy).toBeCloseTo(-0.918692 * 13.605693122994, 9);
+    expect(page.points[0].energy).toBeCloseTo(-0.918989 * 13.605693122994, 9);
   });
 
   it("pages, filters by band and sorts on the server", async () => {
