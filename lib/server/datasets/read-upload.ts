@@ -1,5 +1,6 @@
 import "server-only";
 import { AppError } from "@/lib/server/errors";
+import { readBodyCapped } from "@/lib/server/read-body";
 
 /** Room for the mapping JSON and the multipart framing on top of the file-size limit, bytes. */
 const MULTIPART_OVERHEAD_BYTES = 256 * 1024;
@@ -20,24 +21,17 @@ export async function readUploadParts(request: Request, maxFileBytes: number): P
     throw new AppError("bad_request", "Send the upload as multipart/form-data with the parts file and mapping.");
   if (!request.body) throw new AppError("bad_request", "The upload is empty; send the parts file and mapping.");
 
-  const limit = maxFileBytes + MULTIPART_OVERHEAD_BYTES;
-  const chunks: Uint8Array[] = [];
-  let received = 0;
-  const reader = request.body.getReader();
-  for (;;) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    received += value.byteLength;
-    if (received > limit) {
-      await reader.cancel();
-      return { tooLarge: true };
-    }
-    chunks.push(value);
+  let body: Uint8Array<ArrayBuffer>;
+  try {
+    body = await readBodyCapped(request, maxFileBytes + MULTIPART_OVERHEAD_BYTES);
+  } catch (error) {
+    if (error instanceof AppError && error.code === "payload_too_large") return { tooLarge: true };
+    throw error;
   }
 
   let form: FormData;
   try {
-    form = await new Response(new Blob(chunks as BlobPart[]), { headers: { "content-type": contentType } }).formData();
+    form = await new Response(body, { headers: { "content-type": contentType } }).formData();
   } catch (cause) {
     throw new AppError("bad_request", "The multipart body could not be read.", { cause });
   }
