@@ -296,6 +296,7 @@ export const bandFitResultSchema = z.object({
   pointsUsed: z.int(),
   pointsDropped: z.object({ window: z.int(), unmapped: z.int(), zeroWeight: z.int() }),
   correlation: z.object({ names: z.array(z.string()), matrix: z.array(z.array(nullableNumber)) }),
+  /** χ² of the best start per iteration; iteration 0 is its start point (λ: the damping about to be used) */
   trace: z.array(z.object({ iteration: z.int(), chiSquared: finite, damping: finite })),
   iterations: z.int(),
   stopReason: z.enum(stopReasons),

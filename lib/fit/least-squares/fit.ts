@@ -15,7 +15,7 @@ import { solutionStatistics } from "./statistics";
 
 /** Callbacks and cancellation of a fit. */
 export interface FitControl {
-  /** Called after every iteration of every start. */
+  /** Called at every start (iteration 0, the start's χ², when finite) and after each of its iterations. */
   onProgress?: (progress: FitProgress) => void;
   /** Aborting ends the fit after the current iteration; the best point so far is returned, marked cancelled. */
   signal?: AbortSignal;
@@ -107,6 +107,9 @@ function* runFit(
   let outOfTime = false;
   for (let s = 0; s < starts.length && !cancelled && !outOfTime; s++) {
     const run = new StartRun(evaluator, options, starts[s], lower, upper);
+    // Iteration 0 is the start itself, so a trace shows the χ² the fit began from.
+    if (Number.isFinite(run.chiSquared))
+      control.onProgress?.({ start: s, iteration: 0, chiSquared: run.chiSquared, damping: run.damping, elapsedMs: now() - began });
     while (!run.stopReason) {
       if (control.signal?.aborted) {
         run.stop("cancelled");

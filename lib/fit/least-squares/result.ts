@@ -66,11 +66,11 @@ export interface StartSummary {
   stopReason: StopReason;
 }
 
-/** Progress of a fit, reported once per iteration. */
+/** Progress of a fit, reported at each start (iteration 0) and once per iteration. */
 export interface FitProgress {
   /** Index of the start being run. */
   start: number;
-  /** Iterations of this start so far. */
+  /** Iterations of this start so far (0: the start point, before the first step). */
   iteration: number;
   /** Best χ² of this start so far. */
   chiSquared: number;

@@ -254,10 +254,10 @@ describe("several starts", () => {
 });
 
 describe("progress, limits and cancellation", () => {
-  it("reports every iteration with χ² not increasing", () => {
+  it("reports the start (iteration 0) and every iteration with χ² not increasing", () => {
     const progress: { iteration: number; chiSquared: number; damping: number; elapsedMs: number }[] = [];
     const result = fitLeastSquares(nistProblem(thurber, 0), {}, { onProgress: (p) => progress.push(p) });
-    expect(progress.map((p) => p.iteration)).toEqual(Array.from({ length: result.iterations }, (_, i) => i + 1));
+    expect(progress.map((p) => p.iteration)).toEqual(Array.from({ length: result.iterations + 1 }, (_, i) => i));
     for (let i = 1; i < progress.length; i++) {
       expect(progress[i].chiSquared).toBeLessThanOrEqual(progress[i - 1].chiSquared);
       expect(progress[i].elapsedMs).toBeGreaterThanOrEqual(progress[i - 1].elapsedMs);
