@@ -1,11 +1,11 @@
 "use client";
 
 import { z } from "zod";
+import { chartPointLimit } from "@/lib/server/datasets/chart-points";
 import {
-  type DatasetPointRow,
+  chartPointsSchema,
   datasetDetailsSchema,
   datasetListSchema,
-  datasetPointPageSchema,
   fitDetailsSchema,
   fitListSchema,
   residualPageSchema,
@@ -48,6 +48,7 @@ export function fitRoutes(slug: string) {
   const revision = (fitId: string, n: number) => `${fit(fitId)}/revisions/${n}`;
   return {
     fits: `${workspace}/fits`,
+    fitsOfDataset: (datasetId: string | undefined) => `${workspace}/fits${datasetId ? `?dataset=${encodeURIComponent(datasetId)}` : ""}`,
     fit,
     revisions: (fitId: string) => `${fit(fitId)}/revisions`,
     revision,
@@ -58,16 +59,13 @@ export function fitRoutes(slug: string) {
     bandsCsv: (fitId: string, n: number) => `${revision(fitId, n)}/bands.csv`,
     datasets: `${workspace}/datasets`,
     dataset: (id: string) => `${workspace}/datasets/${encodeURIComponent(id)}`,
-    points: (id: string, page: number, pageSize: number) => `${workspace}/datasets/${encodeURIComponent(id)}/points?page=${page}&pageSize=${pageSize}&sort=index`,
+    chartPoints: (id: string, max: number) => `${workspace}/datasets/${encodeURIComponent(id)}/chart-points?max=${max}`,
   };
 }
 
-/** Most points a chart loads (pages of 500 from the points route); larger datasets show the first ones and say so. */
-export const CHART_POINT_LIMIT = 20_000;
-const POINT_PAGE = 500;
-
 export const fitApi = {
-  listFits: (slug: string) => request(fitRoutes(slug).fits, fitListSchema),
+  /** The workspace's fits, or one dataset's when `datasetId` is given. */
+  listFits: (slug: string, datasetId?: string) => request(fitRoutes(slug).fitsOfDataset(datasetId), fitListSchema),
   getFit: (slug: string, fitId: string) => request(fitRoutes(slug).fit(fitId), fitDetailsSchema),
   getRevision: (slug: string, fitId: string, n: number) => request(fitRoutes(slug).revision(fitId, n), revisionDetailsSchema),
   listResiduals: (slug: string, fitId: string, n: number, query: ResidualQuery) => request(fitRoutes(slug).residuals(fitId, n, query), residualPageSchema),
@@ -79,12 +77,9 @@ export const fitApi = {
   listTemplates: () => request("/api/templates", templateListSchema),
   listDatasets: (slug: string) => request(fitRoutes(slug).datasets, datasetListSchema),
   getDataset: (slug: string, id: string) => request(fitRoutes(slug).dataset(id), datasetDetailsSchema),
-  /** The dataset's points in file order, up to {@link CHART_POINT_LIMIT}. */
-  async allPoints(slug: string, id: string, total: number): Promise<{ points: DatasetPointRow[]; truncated: boolean }> {
-    const pages = Math.ceil(Math.min(total, CHART_POINT_LIMIT) / POINT_PAGE);
-    const results = await Promise.all(
-      Array.from({ length: pages }, (_, i) => request(fitRoutes(slug).points(id, i + 1, POINT_PAGE), datasetPointPageSchema)),
-    );
-    return { points: results.flatMap((r) => r.points), truncated: total > CHART_POINT_LIMIT };
-  },
+  /**
+   * The dataset's points for charts in one request: all of them up to {@link chartPointLimit}, else every
+   * `stride`-th point of each band (the chart-points route).
+   */
+  chartPoints: (slug: string, id: string) => request(fitRoutes(slug).chartPoints(id, chartPointLimit), chartPointsSchema),
 };

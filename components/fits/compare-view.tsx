@@ -96,7 +96,7 @@ export function CompareView({ slug, fitId, a, b }: { slug: string; fitId: string
         {data.dataset && data.points ? (
           <OverlayPanel
             dataset={data.dataset}
-            points={data.points.points}
+            points={data.points}
             models={[
               { key: "a", label: `revision ${a}`, model: resA.fittedModel, transform: revisionTransform(resA.parameters, ra.data.inputs.options) },
               { key: "b", label: `revision ${b}`, model: resB.fittedModel, transform: revisionTransform(resB.parameters, rb.data.inputs.options), dashed: true },

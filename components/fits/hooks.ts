@@ -16,7 +16,7 @@ export function useRevision(slug: string, fitId: string, n: number) {
   });
 }
 
-/** A dataset with all its points (up to the chart limit). */
+/** A dataset with its chart points (all of them, or every n-th point of each band on large datasets). */
 export function useDatasetPoints(slug: string, datasetId: string | undefined) {
   const details = useQuery({
     queryKey: ["dataset", slug, datasetId],
@@ -26,9 +26,9 @@ export function useDatasetPoints(slug: string, datasetId: string | undefined) {
   });
   const dataset = details.data?.dataset;
   const points = useQuery({
-    queryKey: ["dataset-points", slug, datasetId],
-    queryFn: () => fitApi.allPoints(slug, datasetId!, dataset!.summary.pointCount),
-    enabled: Boolean(dataset),
+    queryKey: ["dataset-chart-points", slug, datasetId],
+    queryFn: () => fitApi.chartPoints(slug, datasetId!),
+    enabled: Boolean(datasetId),
     staleTime: Infinity,
   });
   return { dataset, points: points.data, error: details.error ?? points.error, loading: details.isPending || points.isPending };

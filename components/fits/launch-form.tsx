@@ -235,7 +235,7 @@ export function LaunchForm({ slug, mode }: LaunchFormProps) {
           preview.model ? (
             <OverlayPanel
               dataset={data.dataset}
-              points={data.points.points}
+              points={data.points}
               models={[{ key: "preview", label: "model", model: preview.model, transform: previewTransform }]}
               mapping={previewMapping}
               window={window}

@@ -16,7 +16,7 @@ import {
   modelEnergiesByKIndex,
 } from "@/lib/views/band-series";
 import { readNumber } from "@/lib/views/number-field";
-import type { DatasetDetails, DatasetPointRow } from "@/lib/views/responses";
+import type { ChartPoints, DatasetDetails } from "@/lib/views/responses";
 import { pathTicks } from "@/lib/views/ticks";
 import type { BandMapping, EnergyWindow } from "@/lib/fit/bands/schema";
 import type { ModelDocument } from "@/lib/tb";
@@ -46,7 +46,8 @@ export function OverlayPanel({
   showResiduals,
 }: {
   dataset: DatasetDetails;
-  points: DatasetPointRow[];
+  /** the chart-points route's answer: every point, or every `stride`-th point of each band */
+  points: ChartPoints;
   models: OverlayModel[];
   mapping: BandMapping;
   window: EnergyWindow | null;
@@ -62,7 +63,7 @@ export function OverlayPanel({
 
   const colours = useMemo(() => dataBandColours(bands), [bands]);
   const chartPoints = useMemo(
-    () => points.map((p) => ({ band: p.band, energy: p.energy, pathDistance: p.pathDistance, kIndex: p.kIndex, k: [p.kx, p.ky, p.kz] as [number, number, number] })),
+    () => points.points.map((p) => ({ band: p.band, energy: p.energy, pathDistance: p.pathDistance, kIndex: p.kIndex, k: [p.kx, p.ky, p.kz] as [number, number, number] })),
     [points],
   );
   const kPoints = useMemo(() => distinctKPoints(chartPoints), [chartPoints]);
@@ -116,6 +117,11 @@ export function OverlayPanel({
   return (
     <div className="flex flex-col gap-4">
       {computed.map((m) => (m.error ? <Notice key={m.key} tone="error">{`${m.label}: ${m.error}`}</Notice> : null))}
+      {points.stride > 1 ? (
+        <Notice tone="info">
+          {`The charts draw every ${points.stride}th point of each band (${points.points.length.toLocaleString("en-US")} of ${points.total.toLocaleString("en-US")}); the tables use every point.`}
+        </Notice>
+      ) : null}
       <div className="flex flex-wrap items-end gap-x-6 gap-y-3">
         <fieldset className="flex flex-wrap items-center gap-x-3 gap-y-1">
           <legend className="mb-1 text-sm font-medium">Bands shown</legend>

@@ -109,10 +109,9 @@ export function RevisionView({ slug, fitId, number, canEdit }: { slug: string; f
             {data.error ? <Notice tone="error">{data.error.message}</Notice> : null}
             {data.dataset && data.points ? (
               <>
-                {data.points.truncated ? <Notice tone="info" className="mb-3">The chart shows the first points of a large dataset.</Notice> : null}
                 <OverlayPanel
                   dataset={data.dataset}
-                  points={data.points.points}
+                  points={data.points}
                   models={[{ key: "fit", label: `revision ${number}`, model: result.fittedModel, transform: revisionTransform(result.parameters, r.inputs.options) }]}
                   mapping={r.inputs.mapping}
                   window={r.inputs.window}

@@ -192,32 +192,68 @@ export async function listDatasetPoints(params: {
   return { points, total: totals[0]?.total ?? 0 };
 }
 
-/** A chart point: path distance (1/Å), energy (eV), band. */
-export type ChartPoint = { pathDistance: number; energy: number; band: number };
+/**
+ * A point as charts draw it: file-order `index`, k-point index and Cartesian k (1/Å, for model bands at the
+ * data's own k-points), path distance (1/Å), band and energy (eV).
+ */
+export type ChartPoint = Pick<StoredPoint, "index" | "kIndex" | "kx" | "ky" | "kz" | "pathDistance" | "band" | "energy">;
 
 /**
- * At most about `maxPoints` points for the chart: every n-th point of each band in file order (n the same
- * for all bands), so a band's shape and every band survive the thinning.
+ * The stride that keeps at most `maxPoints` points when every `stride`-th point of each band is kept
+ * (ranks 0, stride, 2·stride… in file order): band b keeps ⌈n_b/stride⌉ ≤ n_b/stride + 1 points, so a
+ * stride of ⌈N/(maxPoints − B)⌉ keeps at most maxPoints in all. With maxPoints ≤ B every band still keeps
+ * its first point.
+ * @param pointCount - N, the dataset's points
+ * @param bandCount - B, its bands
+ * @param maxPoints - the most points wanted
  */
-export async function sampleDatasetPoints(params: { datasetId: string; pointCount: number; maxPoints: number }): Promise<ChartPoint[]> {
-  const stride = Math.max(1, Math.ceil(params.pointCount / params.maxPoints));
+export function chartStride(pointCount: number, bandCount: number, maxPoints: number): number {
+  if (pointCount <= maxPoints) return 1;
+  return Math.max(1, Math.ceil(pointCount / Math.max(1, maxPoints - bandCount)));
+}
+
+/**
+ * At most `maxPoints` points for a chart (see {@link chartStride}): every n-th point of each band in file
+ * order, n the same for all bands, so every band and its shape survive the thinning. Ordered by band,
+ * then file order.
+ */
+export async function sampleDatasetPoints(params: {
+  datasetId: string;
+  pointCount: number;
+  bandCount: number;
+  maxPoints: number;
+}): Promise<{ points: ChartPoint[]; stride: number }> {
+  const stride = chartStride(params.pointCount, params.bandCount, params.maxPoints);
   const ranked = db
     .select({
-      pathDistance: datasetPoint.pathDistance,
-      energy: datasetPoint.energy,
-      band: datasetPoint.band,
       index: datasetPoint.index,
+      kIndex: datasetPoint.kIndex,
+      kx: datasetPoint.kx,
+      ky: datasetPoint.ky,
+      kz: datasetPoint.kz,
+      pathDistance: datasetPoint.pathDistance,
+      band: datasetPoint.band,
+      energy: datasetPoint.energy,
       rank: sql<number>`row_number() over (partition by ${datasetPoint.band} order by ${datasetPoint.index}) - 1`.as("rank"),
     })
     .from(datasetPoint)
     .where(eq(datasetPoint.datasetId, params.datasetId))
     .as("ranked");
-  const keep: SQL = sql`${ranked.rank} % ${stride} = 0`;
-  return db
-    .select({ pathDistance: ranked.pathDistance, energy: ranked.energy, band: ranked.band })
+  const points = await db
+    .select({
+      index: ranked.index,
+      kIndex: ranked.kIndex,
+      kx: ranked.kx,
+      ky: ranked.ky,
+      kz: ranked.kz,
+      pathDistance: ranked.pathDistance,
+      band: ranked.band,
+      energy: ranked.energy,
+    })
     .from(ranked)
-    .where(keep)
+    .where(stride === 1 ? undefined : sql`${ranked.rank} % ${stride} = 0`)
     .orderBy(asc(ranked.band), asc(ranked.index));
+  return { points, stride };
 }
 
 /** How many datasets and points a workspace holds (tests check that a refused upload stored nothing). */

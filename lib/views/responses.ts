@@ -27,7 +27,9 @@ export const fitSummarySchema = z.looseObject({
   createdByName: z.string().nullish(),
   latestRevision: z.int().nullable(),
   latestStatus: revisionStatusSchema.nullable(),
+  /** eV */
   latestRms: z.number().nullish(),
+  latestFinishedAt: timestamp.nullish(),
 });
 export type FitSummary = z.infer<typeof fitSummarySchema>;
 export const fitListSchema = z.looseObject({ fits: z.array(fitSummarySchema) });
@@ -126,6 +128,7 @@ export const datasetDetailsSchema = z.looseObject({
 });
 export type DatasetDetails = z.infer<typeof datasetDetailsSchema>["dataset"];
 
+/** A dataset point as charts read it (the chart-points route): k and path distance in 1/Å, energy in eV. */
 export const datasetPointSchema = z.looseObject({
   index: z.int(),
   kIndex: z.int(),
@@ -137,4 +140,6 @@ export const datasetPointSchema = z.looseObject({
   energy: z.number(),
 });
 export type DatasetPointRow = z.infer<typeof datasetPointSchema>;
-export const datasetPointPageSchema = z.looseObject({ points: z.array(datasetPointSchema), total: z.int() });
+/** `GET …/datasets/{id}/chart-points`: every point, or every `stride`-th point of each band, of `total`. */
+export const chartPointsSchema = z.looseObject({ points: z.array(datasetPointSchema), total: z.int(), stride: z.int().min(1) });
+export type ChartPoints = z.infer<typeof chartPointsSchema>;

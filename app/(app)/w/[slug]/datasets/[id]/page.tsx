@@ -9,30 +9,28 @@ import { ButtonLink, Notice, PageHeader, Panel } from "@/components/ui";
 import { getDataset, listDatasetPoints, sampleDatasetPoints, type DatasetDetails } from "@/db/queries/datasets";
 import { hasRole } from "@/lib/auth/roles";
 import { pointsQuerySchema } from "@/lib/schemas/datasets";
+import { chartPointLimit } from "@/lib/server/datasets/chart-points";
 import { isDatasetId } from "@/lib/server/datasets/dataset-access";
 import { requireWorkspaceMember } from "@/lib/server/workspace-access";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Dataset" };
 
-/** Most points the chart draws; larger datasets are thinned per band on the server (every n-th point). */
-const CHART_MAX_POINTS = 20_000;
-
 type SearchParams = Promise<Record<string, string | string[] | undefined>>;
 
 async function Chart({ dataset }: { dataset: DatasetDetails }) {
-  const points = await sampleDatasetPoints({ datasetId: dataset.id, pointCount: dataset.pointCount, maxPoints: CHART_MAX_POINTS });
-  const thinned = points.length < dataset.pointCount;
+  const { points, stride } = await sampleDatasetPoints({ datasetId: dataset.id, pointCount: dataset.pointCount, bandCount: dataset.bandCount, maxPoints: chartPointLimit });
+  const thinned = stride > 1;
   return (
     <>
       <BandScatterChart
-        points={points}
+        points={points.map((p) => ({ pathDistance: p.pathDistance, energy: p.energy, band: p.band }))}
         ticks={dataset.summary.ticks}
         description={`Energy in eV against path distance in 1/Å for ${dataset.bandCount} bands, ${points.length} points drawn${thinned ? ` of ${dataset.pointCount}` : ""}. The table below lists every point.`}
       />
       {thinned ? (
         <p className="mt-2 text-xs text-ink-muted">
-          Drawn: every {Math.ceil(dataset.pointCount / CHART_MAX_POINTS)}th point of each band ({points.length.toLocaleString("en-US")} of {dataset.pointCount.toLocaleString("en-US")}). The table lists all.
+          Drawn: every {stride}th point of each band ({points.length.toLocaleString("en-US")} of {dataset.pointCount.toLocaleString("en-US")}). The table lists all.
         </p>
       ) : null}
     </>
@@ -76,6 +74,14 @@ export default async function DatasetPage({ params, searchParams }: { params: Pr
         description={dataset.description || undefined}
         actions={
           <div className="flex flex-wrap items-start gap-2">
+            <ButtonLink href={`/w/${workspace.slug}/fits?dataset=${dataset.id}`} variant="secondary" size="sm">
+              Fits of this dataset
+            </ButtonLink>
+            {canChange ? (
+              <ButtonLink href={`/w/${workspace.slug}/fits/new?dataset=${dataset.id}`} size="sm">
+                New fit on this dataset
+              </ButtonLink>
+            ) : null}
             <ButtonLink href={fileHref} variant="secondary" size="sm" download={dataset.fileName}>
               Download original
             </ButtonLink>
