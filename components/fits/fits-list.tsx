@@ -19,20 +19,34 @@ const columns = column.columns([
       </Link>
     ),
   }),
-  column.accessor((r) => r.datasetName ?? r.datasetId, { id: "dataset", header: "Dataset" }),
+  column.accessor((r) => r.datasetName ?? r.datasetId, {
+    id: "dataset",
+    header: "Dataset",
+    cell: (c) => (
+      <Link className="text-accent-700 hover:underline" href={`/w/${c.row.original.slug}/datasets/${c.row.original.datasetId}`}>
+        {c.getValue()}
+      </Link>
+    ),
+  }),
   column.accessor("latestRevision", { header: "Latest revision", meta: { numeric: true }, cell: (c) => c.getValue() ?? "—" }),
   column.accessor("latestStatus", { header: "Status", cell: (c) => <StatusBadge status={c.getValue()} /> }),
   column.accessor((r) => r.latestRms ?? null, { id: "rms", header: "RMS", meta: { numeric: true }, cell: (c) => (c.getValue() === null ? "—" : formatQuantity(c.getValue()!, { unit: "eV", decimals: 4 })) }),
   column.accessor((r) => r.createdByName ?? "", { id: "who", header: "Created by" }),
   column.accessor("createdAt", { header: "Created", meta: { figures: true }, cell: (c) => formatDateTime(new Date(c.getValue())) }),
+  column.accessor((r) => r.latestFinishedAt ?? null, {
+    id: "finished",
+    header: "Latest finished",
+    meta: { figures: true },
+    cell: (c) => (c.getValue() === null ? "—" : formatDateTime(new Date(c.getValue()!))),
+  }),
 ]);
 
 /** The workspace's fits (optionally of one dataset), newest first. */
 export function FitsList({ slug, datasetId, canLaunch }: { slug: string; datasetId?: string; canLaunch: boolean }) {
-  const fits = useQuery({ queryKey: ["fits", slug], queryFn: () => fitApi.listFits(slug) });
+  const fits = useQuery({ queryKey: ["fits", slug, datasetId ?? null], queryFn: () => fitApi.listFits(slug, datasetId) });
   if (fits.isPending) return <p className="text-sm text-ink-muted">Loading fits…</p>;
   if (fits.error) return <Notice tone="error">{fits.error.message}</Notice>;
-  const rows = fits.data.fits.filter((f) => !datasetId || f.datasetId === datasetId).map((f) => ({ ...f, slug }));
+  const rows = fits.data.fits.map((f) => ({ ...f, slug }));
   if (rows.length === 0)
     return (
       <EmptyState

@@ -1,7 +1,7 @@
 import { and, asc, desc, eq, inArray, max, sql } from "drizzle-orm";
 import { randomUUID } from "node:crypto";
 import { db } from "@/db/client";
-import { type NewFitResidual, type RevisionStatus, fit, fitResidual, fitRevision, organization, user } from "@/db/schema";
+import { type NewFitResidual, type RevisionStatus, dataset, fit, fitResidual, fitRevision, organization, user } from "@/db/schema";
 
 // Fits and their revisions: creation, reads for the routes, and the guarded writes of the worker.
 // Every final write carries `status = 'running' AND attempts = <the writer's attempt>`, so a superseded or
@@ -95,21 +95,45 @@ const revisionSummaryColumns = {
   rms: sql<number | null>`(${fitRevision.result} ->> 'rms')::double precision`,
 };
 
-/** The workspace's fits, newest first, each with its latest revision's number and status. */
-export async function listFits(workspaceId: string) {
-  const fits = await db
-    .select({ id: fit.id, name: fit.name, notes: fit.notes, datasetId: fit.datasetId, createdAt: fit.createdAt })
-    .from(fit)
-    .where(eq(fit.workspaceId, workspaceId))
-    .orderBy(desc(fit.createdAt));
-  if (fits.length === 0) return [];
-  const latest = await db
-    .selectDistinctOn([fitRevision.fitId], { fitId: fitRevision.fitId, number: fitRevision.number, status: fitRevision.status })
+/**
+ * The workspace's fits (optionally only those of one dataset), newest first, each with its dataset's
+ * name, its creator's name and its latest revision's number, status, RMS (eV) and finish time — one
+ * query: the latest revision comes from a lateral subquery on the (fit_id, number) index.
+ */
+export async function listFits(params: { workspaceId: string; datasetId?: string }) {
+  const latest = db
+    .select({
+      number: fitRevision.number,
+      status: fitRevision.status,
+      rms: sql<number | null>`(${fitRevision.result} ->> 'rms')::double precision`.as("latest_rms"),
+      finishedAt: fitRevision.finishedAt,
+    })
     .from(fitRevision)
-    .where(inArray(fitRevision.fitId, fits.map((f) => f.id)))
-    .orderBy(fitRevision.fitId, desc(fitRevision.number));
-  const byFit = new Map(latest.map((r) => [r.fitId, r]));
-  return fits.map((f) => ({ ...f, latestRevision: byFit.get(f.id)?.number ?? null, latestStatus: byFit.get(f.id)?.status ?? null }));
+    .where(eq(fitRevision.fitId, fit.id))
+    .orderBy(desc(fitRevision.number))
+    .limit(1)
+    .as("latest");
+  const rows = await db
+    .select({
+      id: fit.id,
+      name: fit.name,
+      notes: fit.notes,
+      datasetId: fit.datasetId,
+      datasetName: dataset.name,
+      createdByName: user.name,
+      createdAt: fit.createdAt,
+      latestRevision: latest.number,
+      latestStatus: latest.status,
+      latestRms: latest.rms,
+      latestFinishedAt: latest.finishedAt,
+    })
+    .from(fit)
+    .innerJoin(dataset, eq(dataset.id, fit.datasetId))
+    .leftJoin(user, eq(user.id, fit.createdBy))
+    .leftJoinLateral(latest, sql`true`)
+    .where(and(eq(fit.workspaceId, params.workspaceId), params.datasetId === undefined ? undefined : eq(fit.datasetId, params.datasetId)))
+    .orderBy(desc(fit.createdAt), asc(fit.id));
+  return rows;
 }
 
 /** One fit of the workspace with its revisions (summaries, oldest first), or null. */

@@ -38,3 +38,8 @@ export const newRevisionSchema = z
   })
   .strict();
 export type NewRevisionInput = z.output<typeof newRevisionSchema>;
+
+/** Query of `GET /api/workspaces/{slug}/fits`: `dataset` (a dataset id) keeps only that dataset's fits. */
+export const fitListQuerySchema = z.object({
+  dataset: z.uuid("dataset is a dataset id").optional(),
+});

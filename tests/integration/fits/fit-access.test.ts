@@ -74,11 +74,11 @@ describe("bad launch input is refused before anything is stored", () => {
   ];
   it.each(cases)("%s → 4xx with a clear message, no revision", async (_label, body, message) => {
     const workspace = await getWorkspaceBySlug(team.slug);
-    const before = (await listFits(workspace!.id)).length;
+    const before = (await listFits({ workspaceId: workspace!.id })).length;
     const response = await team.editor.post(`${base()}/fits`, body());
     expect(response.status).toBeGreaterThanOrEqual(400);
     expect(response.status).toBeLessThan(500);
     expect((response.body as { error: { message: string } }).error.message).toMatch(message);
-    expect((await listFits(workspace!.id)).length).toBe(before);
+    expect((await listFits({ workspaceId: workspace!.id })).length).toBe(before);
   });
 });

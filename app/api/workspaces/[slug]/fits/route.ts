@@ -1,11 +1,19 @@
 import { NextResponse } from "next/server";
 import { listFits } from "@/db/queries/fits";
-import { launchFitSchema } from "@/lib/server/fits/inputs";
+import { fitListQuerySchema, launchFitSchema } from "@/lib/server/fits/inputs";
 import { launchFit } from "@/lib/server/fits/launch";
+import { parseInput } from "@/lib/server/parse-input";
 import { workspaceRoute } from "@/lib/server/route";
 
-/** The workspace's fits, newest first: `{ fits: [{ id, name, notes, datasetId, createdAt, latestRevision, latestStatus }] }`. */
-export const GET = workspaceRoute({ minimumRole: "viewer" }, async ({ access }) => ({ fits: await listFits(access.workspace.id) }));
+/**
+ * The workspace's fits, newest first; `?dataset=<id>` keeps one dataset's fits →
+ * `{ fits: [{ id, name, notes, datasetId, datasetName, createdByName, createdAt, latestRevision,
+ * latestStatus, latestRms, latestFinishedAt }] }` (RMS in eV; null fields while no revision has them).
+ */
+export const GET = workspaceRoute({ minimumRole: "viewer" }, async ({ access, request }) => {
+  const query = parseInput(fitListQuerySchema, Object.fromEntries(new URL(request.url).searchParams));
+  return { fits: await listFits({ workspaceId: access.workspace.id, datasetId: query.dataset }) };
+});
 
 /**
  * Launches a fit (editor or owner): `{ datasetId, name, notes?, model, mapping?, window?, options? }` →
