@@ -29,7 +29,7 @@ const columns = column.columns([
   column.accessor("modelBand", { header: "Model band", enableSorting: false }),
   column.accessor("pathDistance", { header: "Path (1/Å)", cell: (c) => c.getValue().toFixed(4) }),
   column.accessor("energy", { header: "Data E", cell: (c) => ev(c.getValue()) }),
-  column.accessor("modelEnergy", { header: "Model E", enableSorting: false, cell: (c) => ev(c.getValue()) }),
+  column.accessor("modelEnergy", { header: "Model E", cell: (c) => ev(c.getValue()) }),
   column.accessor("residual", { header: "Residual", cell: (c) => ev(c.getValue()) }),
   column.accessor((row) => Math.abs(row.residual), { id: "absResidual", header: "|Residual|", sortDescFirst: true, cell: (c) => ev(c.getValue()) }),
   column.accessor("weightedResidual", { header: "Residual/σ", enableSorting: false, cell: (c) => c.getValue().toFixed(3).replace("-", "\u2212") }),

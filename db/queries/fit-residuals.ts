@@ -3,7 +3,7 @@ import { db } from "@/db/client";
 import { fitResidual } from "@/db/schema";
 
 /** Orders a residual table can be sorted by; a leading "-" sorts descending. */
-export const residualSortKeys = ["pointIndex", "dataBand", "pathDistance", "energy", "residual", "absResidual"] as const;
+export const residualSortKeys = ["pointIndex", "dataBand", "pathDistance", "energy", "modelEnergy", "residual", "absResidual"] as const;
 export type ResidualSortKey = (typeof residualSortKeys)[number];
 export type ResidualSort = ResidualSortKey | `-${ResidualSortKey}`;
 
@@ -12,6 +12,7 @@ const sortColumns = {
   dataBand: fitResidual.dataBand,
   pathDistance: fitResidual.pathDistance,
   energy: fitResidual.energy,
+  modelEnergy: fitResidual.modelEnergy,
   residual: fitResidual.residual,
   absResidual: fitResidual.absResidual,
 } as const;

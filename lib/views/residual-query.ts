@@ -1,7 +1,7 @@
 import { z } from "zod";
 
 /** Columns of the per-point residual table the server can sort by. */
-export const residualSortColumns = ["pointIndex", "dataBand", "pathDistance", "energy", "residual", "absResidual"] as const;
+export const residualSortColumns = ["pointIndex", "dataBand", "pathDistance", "energy", "modelEnergy", "residual", "absResidual"] as const;
 export type ResidualSortColumn = (typeof residualSortColumns)[number];
 
 /** What the residual table asks the server for. */

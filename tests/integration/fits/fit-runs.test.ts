@@ -71,6 +71,15 @@ describe("a fit on a fixture dataset", () => {
     expect(body.rows.every((r) => r.dataBand === 2)).toBe(true);
     const abs = body.rows.map((r) => Math.abs(r.residual));
     expect(abs).toEqual([...abs].sort((a, b) => b - a));
+    // by model energy, both ways: the rows come back in that order, ties broken by point index
+    for (const [sort, sign] of [["modelEnergy", 1], ["-modelEnergy", -1]] as const) {
+      const byModel = await team.viewer.get(`${base()}/fits/${fitId}/revisions/1/residuals?pageSize=1000&sort=${sort}`);
+      expect(byModel.status).toBe(200);
+      const rows = (byModel.body as { rows: { pointIndex: number; modelEnergy: number }[] }).rows;
+      expect(rows).toHaveLength(total);
+      const expected = [...rows].sort((a, b) => sign * (a.modelEnergy - b.modelEnergy) || a.pointIndex - b.pointIndex);
+      expect(rows.map((r) => r.pointIndex)).toEqual(expected.map((r) => r.pointIndex));
+    }
     const bad = await team.viewer.get(`${base()}/fits/${fitId}/revisions/1/residuals?sort=sideways`);
     expect(bad.status).toBe(422);
   });
