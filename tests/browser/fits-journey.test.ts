@@ -154,6 +154,59 @@ describe("fit views in the browser", () => {
     await page.context().close();
   });
 
+  it("goes from a dataset to its fits and to a new fit on it; charts read the chart points in one request", async () => {
+    expect(revisionPath).not.toBe("");
+    const page = await newIsolatedPage(browser, problems);
+    const pointRequests: string[] = [];
+    page.on("request", (r) => void (/\/datasets\/[^/]+\/(chart-)?points\b/.test(r.url()) && pointRequests.push(new URL(r.url()).pathname.split("/").at(-1)!)));
+    await signIn(page, emails.editor, `/w/${team.slug}/datasets/${datasetId}`);
+
+    // The dataset's fits: name, dataset, latest revision with its status and RMS, who.
+    await page.getByRole("link", { name: "Fits of this dataset" }).click();
+    await page.waitForURL(`**/fits?dataset=${datasetId}`);
+    const row = page.getByRole("row", { name: /HQ-07 π bands/ });
+    await row.waitFor();
+    const cells = await row.getByRole("cell").allTextContents();
+    expect(cells[1]).toBe(fixtureMappings[FIXTURE].name);
+    expect(cells.slice(2, 4)).toEqual(["2", "finished"]);
+    expect(cells[4]).toMatch(/^0\.\d{4}\seV$/);
+    expect(cells[5]).toMatch(/^Test editor/);
+    expect(await page.getByRole("row", { name: /HQ-S3/ }).count()).toBe(0);
+    await screenshot(page, "fits-10-dataset-fits");
+
+    // The convergence trace starts at iteration 0, the start's χ²: the chart shows the whole drop.
+    await page.goto(revisionPath);
+    const trace = page.getByRole("img", { name: /^χ² fell from/ });
+    await trace.waitFor();
+    const [, from, to] = /fell from (\S+) to (\S+) in/.exec((await trace.getAttribute("aria-label"))!)!;
+    expect(Number(from) / Number(to)).toBeGreaterThan(10);
+
+    // The per-point table sorts by model energy on the server too.
+    const residualTable = page.getByRole("table", { name: /Per-point residuals/ });
+    const byModel = page.waitForResponse((r) => r.url().includes("/residuals?") && /sort=-?modelEnergy/.test(r.url()));
+    const modelHeader = residualTable.getByRole("columnheader", { name: /Model E/ });
+    await modelHeader.getByRole("button").click();
+    const response = await byModel;
+    // Numeric columns sort largest first on the first click (TanStack Table's default); the header says which.
+    const descending = new URL(response.url()).searchParams.get("sort") === "-modelEnergy";
+    const modelEnergies = ((await response.json()) as { rows: { modelEnergy: number }[] }).rows.map((r) => r.modelEnergy);
+    expect(modelEnergies.length).toBeGreaterThan(1);
+    expect(modelEnergies).toEqual([...modelEnergies].sort((a, b) => (descending ? b - a : a - b)));
+    await expect.poll(() => modelHeader.getAttribute("aria-sort")).toBe(descending ? "descending" : "ascending");
+
+    // A new fit on the dataset: the form opens with it chosen and previews it.
+    await page.goto(`/w/${team.slug}/datasets/${datasetId}`);
+    await page.getByRole("link", { name: "New fit on this dataset" }).click();
+    await page.waitForURL(`**/fits/new?dataset=${datasetId}`);
+    await page.getByRole("img", { name: /Band energies of HQ-07/ }).waitFor();
+    // The select shows the dataset once the workspace's datasets have loaded.
+    await expect.poll(() => page.getByLabel("Dataset").inputValue()).toBe(datasetId);
+    await screenshot(page, "fits-11-new-fit-on-dataset");
+    // The revision page and the preview each loaded the chart points once, never pages of points.
+    expect(pointRequests).toEqual(["chart-points", "chart-points"]);
+    await page.context().close();
+  });
+
   it("shows a long fit's progress moving and cancels it", async () => {
     const page = await newIsolatedPage(browser, problems);
     await signIn(page, emails.editor, `/w/${team.slug}/fits/new`);
