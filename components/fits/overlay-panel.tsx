@@ -119,7 +119,7 @@ export function OverlayPanel({
       {computed.map((m) => (m.error ? <Notice key={m.key} tone="error">{`${m.label}: ${m.error}`}</Notice> : null))}
       {points.stride > 1 ? (
         <Notice tone="info">
-          {`The charts draw every ${points.stride}th point of each band (${points.points.length.toLocaleString("en-US")} of ${points.total.toLocaleString("en-US")}); the tables use every point.`}
+          {`The charts draw one in ${points.stride} points of each band (${points.points.length.toLocaleString("en-US")} of ${points.total.toLocaleString("en-US")}); the tables use every point.`}
         </Notice>
       ) : null}
       <div className="flex flex-wrap items-end gap-x-6 gap-y-3">

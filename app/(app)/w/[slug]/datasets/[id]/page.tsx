@@ -30,7 +30,7 @@ async function Chart({ dataset }: { dataset: DatasetDetails }) {
       />
       {thinned ? (
         <p className="mt-2 text-xs text-ink-muted">
-          Drawn: every {stride}th point of each band ({points.length.toLocaleString("en-US")} of {dataset.pointCount.toLocaleString("en-US")}). The table lists all.
+          Drawn: one in {stride} points of each band ({points.length.toLocaleString("en-US")} of {dataset.pointCount.toLocaleString("en-US")}). The table lists all.
         </p>
       ) : null}
     </>
