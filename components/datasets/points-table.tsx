@@ -4,13 +4,13 @@ import { createColumnHelper, rowSortingFeature, tableFeatures, useTable, type Co
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useTransition } from "react";
 import { formatQuantity } from "@/components/format";
-import { Button, Select, cx } from "@/components/ui";
+import { Button, Select, TableView, type DataColumnMeta } from "@/components/ui";
 import type { StoredPoint } from "@/db/queries/datasets";
 import type { PointSortKey } from "@/lib/schemas/datasets";
 
 // Sorting, the band filter and the page live in the URL; the server page reads them and queries one page,
 // so half a million points never reach the browser.
-const features = tableFeatures({ rowSortingFeature, columnMeta: {} as { numeric?: boolean } });
+const features = tableFeatures({ rowSortingFeature, columnMeta: {} as DataColumnMeta });
 const column = createColumnHelper<typeof features, StoredPoint>();
 
 const quantity = (value: number | null, unit: string, decimals = 4) => (value === null ? "—" : formatQuantity(value, { unit, decimals }));
@@ -100,60 +100,14 @@ export function PointsTable({ points, total, page, pageSize, sort, band, bands }
           {total.toLocaleString("en-US")} points · page {page} of {pageCount}
         </p>
       </div>
-      <div className="overflow-x-auto">
-        <table className={cx("w-full border-collapse text-sm", pending && "opacity-60")}>
-          <caption className="sr-only">Points of this dataset, {pageSize} per page, sorted on the server</caption>
-          <thead className="bg-surface-sunken">
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => {
-                  const numeric = header.column.columnDef.meta?.numeric;
-                  const direction = header.column.getIsSorted();
-                  const canSort = sortable.has(header.column.id);
-                  return (
-                    <th
-                      key={header.id}
-                      scope="col"
-                      aria-sort={canSort ? (direction === "asc" ? "ascending" : direction === "desc" ? "descending" : "none") : undefined}
-                      className={cx("border-y border-line px-4 py-2 text-xs font-semibold uppercase tracking-wide text-ink-muted", numeric ? "text-right" : "text-left")}
-                    >
-                      {canSort ? (
-                        <button type="button" onClick={header.column.getToggleSortingHandler()} className={cx("inline-flex items-center gap-1 uppercase hover:text-ink", numeric && "flex-row-reverse")}>
-                          <table.FlexRender header={header} />
-                          <span aria-hidden="true" className="w-3 text-accent-700">
-                            {direction === "asc" ? "▲" : direction === "desc" ? "▼" : ""}
-                          </span>
-                        </button>
-                      ) : (
-                        <table.FlexRender header={header} />
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.length === 0 ? (
-              <tr>
-                <td colSpan={columns.length} className="px-4 py-6 text-center text-ink-muted">
-                  No points on this page.
-                </td>
-              </tr>
-            ) : (
-              table.getRowModel().rows.map((row) => (
-                <tr key={row.id} className="border-b border-line last:border-b-0 hover:bg-surface-raised">
-                  {row.getAllCells().map((cell) => (
-                    <td key={cell.id} className={cx("px-4 py-1.5", cell.column.columnDef.meta?.numeric && "whitespace-nowrap text-right tabular-nums")}>
-                      <table.FlexRender cell={cell} />
-                    </td>
-                  ))}
-                </tr>
-              ))
-            )}
-          </tbody>
-        </table>
-      </div>
+      <TableView
+        table={table}
+        caption={`Points of this dataset, ${pageSize} per page, sorted on the server`}
+        captionHidden
+        empty="No points on this page."
+        density="dense"
+        className={pending ? "opacity-60" : undefined}
+      />
       <nav aria-label="Pages of points" className="flex items-center justify-end gap-2 px-4 py-2">
         <Button variant="secondary" size="sm" disabled={page <= 1 || pending} onClick={() => navigate({ page: String(page - 1) })}>
           Previous page

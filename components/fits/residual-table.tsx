@@ -12,34 +12,31 @@ import {
 } from "@tanstack/react-table";
 import { useState } from "react";
 import { formatQuantity } from "@/components/format";
-import { Button, Notice, Select, cx } from "@/components/ui";
+import { Button, Notice, Select, TableView, type DataColumnMeta } from "@/components/ui";
 import { pageCount, residualQuerySchema, sortFromTable } from "@/lib/views/residual-query";
 import type { ResidualRow } from "@/lib/views/responses";
 import { fitApi } from "./api";
 
 // Sorting and paging happen in the database (issue 5's residuals route); the table only holds one page.
-const features = tableFeatures({ rowSortingFeature, rowPaginationFeature });
+const features = tableFeatures({ rowSortingFeature, rowPaginationFeature, columnMeta: {} as DataColumnMeta });
 const column = createColumnHelper<typeof features, ResidualRow>();
 const ev = (value: number) => formatQuantity(value, { unit: "eV", decimals: 4 });
-const numeric = "whitespace-nowrap text-right tabular-nums";
+const numeric: DataColumnMeta = { numeric: true };
+const figures: DataColumnMeta = { figures: true };
 
 const columns = column.columns([
-  column.accessor("pointIndex", { header: "Point", cell: (c) => c.getValue() + 1 }),
-  column.accessor("dataBand", { header: "Data band" }),
-  column.accessor("modelBand", { header: "Model band", enableSorting: false }),
-  column.accessor("pathDistance", { header: "Path (1/Å)", cell: (c) => c.getValue().toFixed(4) }),
-  column.accessor("energy", { header: "Data E", cell: (c) => ev(c.getValue()) }),
-  column.accessor("modelEnergy", { header: "Model E", cell: (c) => ev(c.getValue()) }),
-  column.accessor("residual", { header: "Residual", cell: (c) => ev(c.getValue()) }),
-  column.accessor((row) => Math.abs(row.residual), { id: "absResidual", header: "|Residual|", sortDescFirst: true, cell: (c) => ev(c.getValue()) }),
-  column.accessor("weightedResidual", { header: "Residual/σ", enableSorting: false, cell: (c) => c.getValue().toFixed(3).replace("-", "\u2212") }),
+  column.accessor("pointIndex", { header: "Point", cell: (c) => c.getValue() + 1, meta: figures }),
+  column.accessor("dataBand", { header: "Data band", meta: figures }),
+  column.accessor("modelBand", { header: "Model band", enableSorting: false, meta: figures }),
+  column.accessor("pathDistance", { header: "Path (1/Å)", cell: (c) => c.getValue().toFixed(4), meta: numeric }),
+  column.accessor("energy", { header: "Data E", cell: (c) => ev(c.getValue()), meta: numeric }),
+  column.accessor("modelEnergy", { header: "Model E", cell: (c) => ev(c.getValue()), meta: numeric }),
+  column.accessor("residual", { header: "Residual", cell: (c) => ev(c.getValue()), meta: numeric }),
+  column.accessor((row) => Math.abs(row.residual), { id: "absResidual", header: "|Residual|", sortDescFirst: true, cell: (c) => ev(c.getValue()), meta: numeric }),
+  column.accessor("weightedResidual", { header: "Residual/σ", enableSorting: false, cell: (c) => c.getValue().toFixed(3).replace("-", "\u2212"), meta: numeric }),
 ]);
 const emptyRows: ResidualRow[] = [];
 const PAGE_SIZE = 25;
-
-function ariaSort(direction: false | "asc" | "desc") {
-  return direction === "asc" ? "ascending" : direction === "desc" ? "descending" : "none";
-}
 
 /** Every point's residual, one page at a time, sorted and filtered by band on the server. */
 export function ResidualTable({ slug, fitId, revision, bands }: { slug: string; fitId: string; revision: number; bands: number[] }) {
@@ -96,59 +93,14 @@ export function ResidualTable({ slug, fitId, revision, bands }: { slug: string; 
         </p>
       </div>
       {result.error ? <Notice tone="error" className="mx-4 mb-3">{result.error.message}</Notice> : null}
-      <div className="overflow-x-auto">
-        <table className="w-full border-collapse text-sm" aria-busy={result.isFetching}>
-          <caption className="sr-only">Per-point residuals (model − data, eV); sort by a column header</caption>
-          <thead className="bg-surface-sunken">
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => {
-                  const direction = header.column.getIsSorted();
-                  const isNumber = header.column.id !== "pointIndex" && header.column.id !== "dataBand" && header.column.id !== "modelBand";
-                  return (
-                    <th
-                      key={header.id}
-                      scope="col"
-                      aria-sort={header.column.getCanSort() ? ariaSort(direction) : undefined}
-                      className={cx("border-y border-line px-3 py-2 text-xs font-semibold uppercase tracking-wide text-ink-muted", isNumber ? "text-right" : "text-left")}
-                    >
-                      {header.column.getCanSort() ? (
-                        <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 uppercase hover:text-ink">
-                          <table.FlexRender header={header} />
-                          <span aria-hidden="true" className="w-3 text-accent-700">
-                            {direction === "asc" ? "▲" : direction === "desc" ? "▼" : ""}
-                          </span>
-                        </button>
-                      ) : (
-                        <table.FlexRender header={header} />
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.length === 0 ? (
-              <tr>
-                <td colSpan={columns.length} className="px-4 py-6 text-center text-ink-muted">
-                  {result.isPending ? "Loading residuals…" : "No points in this selection."}
-                </td>
-              </tr>
-            ) : (
-              table.getRowModel().rows.map((row) => (
-                <tr key={row.id} className="border-b border-line last:border-b-0 hover:bg-surface-raised">
-                  {row.getAllCells().map((cell) => (
-                    <td key={cell.id} className={cx("px-3 py-1.5", ["pointIndex", "dataBand", "modelBand"].includes(cell.column.id) ? "tabular-nums" : numeric)}>
-                      <table.FlexRender cell={cell} />
-                    </td>
-                  ))}
-                </tr>
-              ))
-            )}
-          </tbody>
-        </table>
-      </div>
+      <TableView
+        table={table}
+        caption="Per-point residuals (model − data, eV); sort by a column header"
+        captionHidden
+        empty={result.isPending ? "Loading residuals…" : "No points in this selection."}
+        density="compact"
+        busy={result.isFetching}
+      />
       <div className="flex items-center justify-end gap-2 px-4 py-3">
         <Button variant="secondary" size="sm" onClick={() => table.previousPage()} disabled={pagination.pageIndex === 0}>
           Previous page

@@ -15,19 +15,7 @@ import {
   type SortingState,
 } from "@tanstack/react-table";
 import { useState, type ReactNode } from "react";
-import { cx } from "./class-names";
-
-/** Per-column presentation hints. */
-export interface DataColumnMeta {
-  /** Right-align with tabular figures (numbers with units). */
-  numeric?: boolean;
-  /** Tabular figures without right alignment (dates, times). */
-  figures?: boolean;
-  /** Right-align without number styling (row actions). */
-  alignEnd?: boolean;
-  /** Screen-reader-only header text for columns whose visible header is empty (row actions). */
-  srHeader?: string;
-}
+import { TableView, type DataColumnMeta } from "./table-view";
 
 /** The feature set every Bandwright table uses: client-side sorting on a small, loaded page of rows. */
 export const dataTableFeatures = tableFeatures({
@@ -62,12 +50,6 @@ interface DataTableProps<Row extends RowData> {
   initialSorting?: SortingState;
 }
 
-function sortLabel(direction: false | "asc" | "desc"): "ascending" | "descending" | "none" {
-  if (direction === "asc") return "ascending";
-  if (direction === "desc") return "descending";
-  return "none";
-}
-
 /** A dense, sortable table. Sortable headers are buttons; `aria-sort` reports the order. */
 export function DataTable<Row extends RowData>({
   columns,
@@ -87,79 +69,6 @@ export function DataTable<Row extends RowData>({
     state: { sorting },
     onSortingChange: setSorting,
   });
-  const rows = table.getRowModel().rows;
 
-  return (
-    <div className="overflow-x-auto">
-      <table className="w-full border-collapse text-sm">
-        <caption className={cx("px-4 py-2 text-left text-sm text-ink-muted", captionHidden && "sr-only")}>{caption}</caption>
-        <thead className="bg-surface-sunken">
-          {table.getHeaderGroups().map((group) => (
-            <tr key={group.id}>
-              {group.headers.map((header) => {
-                const meta = header.column.columnDef.meta;
-                const direction = header.column.getIsSorted();
-                const canSort = header.column.getCanSort();
-                return (
-                  <th
-                    key={header.id}
-                    scope="col"
-                    aria-sort={canSort ? sortLabel(direction) : undefined}
-                    className={cx(
-                      "border-y border-line px-4 py-2 text-xs font-semibold uppercase tracking-wide text-ink-muted",
-                      meta?.numeric || meta?.alignEnd ? "text-right" : "text-left",
-                    )}
-                  >
-                    {header.isPlaceholder ? null : canSort ? (
-                      <button
-                        type="button"
-                        onClick={header.column.getToggleSortingHandler()}
-                        className={cx("inline-flex items-center gap-1 uppercase hover:text-ink", meta?.numeric && "flex-row-reverse")}
-                      >
-                        <table.FlexRender header={header} />
-                        <span aria-hidden="true" className="w-3 text-accent-700">
-                          {direction === "asc" ? "▲" : direction === "desc" ? "▼" : ""}
-                        </span>
-                      </button>
-                    ) : meta?.srHeader ? (
-                      <span className="sr-only">{meta.srHeader}</span>
-                    ) : (
-                      <table.FlexRender header={header} />
-                    )}
-                  </th>
-                );
-              })}
-            </tr>
-          ))}
-        </thead>
-        <tbody>
-          {rows.length === 0 ? (
-            <tr>
-              <td colSpan={columns.length} className="px-4 py-6 text-center text-ink-muted">
-                {empty ?? "Nothing to show."}
-              </td>
-            </tr>
-          ) : (
-            rows.map((row) => (
-              <tr key={row.id} className="border-b border-line last:border-b-0 hover:bg-surface-raised">
-                {row.getAllCells().map((cell) => (
-                  <td
-                    key={cell.id}
-                    className={cx(
-                      "px-4 py-2 align-middle",
-                      cell.column.columnDef.meta?.numeric && "whitespace-nowrap text-right tabular-nums",
-                      cell.column.columnDef.meta?.figures && "whitespace-nowrap tabular-nums",
-                      cell.column.columnDef.meta?.alignEnd && "whitespace-nowrap text-right",
-                    )}
-                  >
-                    <table.FlexRender cell={cell} />
-                  </td>
-                ))}
-              </tr>
-            ))
-          )}
-        </tbody>
-      </table>
-    </div>
-  );
+  return <TableView table={table} caption={caption} captionHidden={captionHidden} empty={empty ?? "Nothing to show."} />;
 }

@@ -12,4 +12,6 @@ export type { BadgeTone } from "./badge";
 export { Notice } from "./notice";
 export type { NoticeTone } from "./notice";
 export { DataTable, dataColumnHelper, dataTableFeatures } from "./data-table";
-export type { DataColumn, DataColumnMeta, DataTableFeatures } from "./data-table";
+export type { DataColumn, DataTableFeatures } from "./data-table";
+export { TableView } from "./table-view";
+export type { DataColumnMeta, TableDensity, TableViewFeatures } from "./table-view";
