@@ -9,28 +9,13 @@ import { IDENTITY_TRANSFORM } from "@/lib/views/band-series";
 import { TEMPLATE_IDS, type ModelDocument, type TemplateId, buildTemplate } from "@/lib/tb";
 import { dataBandColours } from "@/lib/views/band-colours";
 import { bandPairs } from "@/lib/views/band-mapping";
-import { type LaunchDraft, parameterDrafts, readLaunchDraft } from "@/lib/views/launch-draft";
+import { type LaunchDraft, defaultLaunchOptions, parameterDrafts, readLaunchDraft } from "@/lib/views/launch-draft";
 import type { RevisionDetails } from "@/lib/views/responses";
 import { RouteError, fitApi } from "./api";
 import { useDatasetPoints } from "./hooks";
 import { MappingPicture } from "./mapping-picture";
 import { OverlayPanel } from "./overlay-panel";
 import { ParameterEditor } from "./parameter-editor";
-
-const defaultOptions: LaunchDraft["options"] = {
-  maxIterations: "200",
-  timeLimitSeconds: "60",
-  starts: "1",
-  seed: "1",
-  sigma: "from-data",
-  uniformSigma: "1",
-  bandWeights: {},
-  offsetValue: "0",
-  offsetFree: false,
-  renormalisationValue: "1",
-  renormalisationFree: false,
-  notifyByEmail: false,
-};
 
 function templateDraft(template: TemplateId, datasetId: string, name: string): LaunchDraft {
   const doc = buildTemplate(template);
@@ -41,7 +26,7 @@ function templateDraft(template: TemplateId, datasetId: string, name: string): L
     parameters: parameterDrafts(doc.parameters),
     mapping: { kind: "offset", firstDataBand: "", lastDataBand: "", firstModelBand: "1" },
     window: { min: "", max: "" },
-    options: defaultOptions,
+    options: defaultLaunchOptions,
   };
 }
 

@@ -51,6 +51,22 @@ export interface LaunchDraft {
   };
 }
 
+/** The run options a new launch form starts with (the fit engine's own defaults, as text). */
+export const defaultLaunchOptions: LaunchDraft["options"] = {
+  maxIterations: "200",
+  timeLimitSeconds: "60",
+  starts: "1",
+  seed: "1",
+  sigma: "from-data",
+  uniformSigma: "1",
+  bandWeights: {},
+  offsetValue: "0",
+  offsetFree: false,
+  renormalisationValue: "1",
+  renormalisationFree: false,
+  notifyByEmail: false,
+};
+
 /** The body of `POST /api/workspaces/{slug}/fits`: the route's own schema. */
 export const launchRequestSchema = launchFitSchema;
 export type LaunchRequest = z.input<typeof launchFitSchema>;

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { buildTemplate } from "@/lib/tb";
-import { type LaunchDraft, parameterDrafts, readLaunchDraft } from "@/lib/views/launch-draft";
+import { type LaunchDraft, defaultLaunchOptions, parameterDrafts, readLaunchDraft } from "@/lib/views/launch-draft";
 import { readNumber } from "@/lib/views/number-field";
 
 function draft(change: (d: LaunchDraft) => void = () => {}): LaunchDraft {
@@ -11,20 +11,7 @@ function draft(change: (d: LaunchDraft) => void = () => {}): LaunchDraft {
     parameters: parameterDrafts(buildTemplate("honeycomb-pz").parameters),
     mapping: { kind: "offset", firstDataBand: "", lastDataBand: "", firstModelBand: "1" },
     window: { min: "-9", max: "5" },
-    options: {
-      maxIterations: "200",
-      timeLimitSeconds: "60",
-      starts: "1",
-      seed: "1",
-      sigma: "from-data",
-      uniformSigma: "1",
-      bandWeights: {},
-      offsetValue: "0",
-      offsetFree: false,
-      renormalisationValue: "1",
-      renormalisationFree: false,
-      notifyByEmail: false,
-    },
+    options: { ...defaultLaunchOptions, bandWeights: {} },
   };
   change(d);
   return d;
