@@ -1,5 +1,8 @@
 import { z } from "zod";
 
+/** At least 32 characters: 128 bits or more when hex or base64 (npm start writes 64 hex digits). */
+const mailSinkToken = z.string().min(32, { error: "MAIL_SINK_TOKEN must be at least 32 characters" });
+
 // The one place that reads process.env. Parsed on first use; a missing or malformed variable stops the
 // process with a message naming it. Defaults here are the documented defaults (see .env.example).
 const envSchema = z.object({
@@ -16,6 +19,11 @@ const envSchema = z.object({
   MAIL_FROM: z.string().min(3).default("Bandwright <no-reply@bandwright.invalid>"),
   /** HTTP address of the development mail sink's message list; unset in production (disables /dev/mail). */
   MAIL_SINK_URL: z.url().optional(),
+  /**
+   * Bearer token the sink demands on its HTTP side (it holds password-reset links). Required with
+   * MAIL_SINK_URL; npm start generates one into .env.local, the test set-up draws one per run.
+   */
+  MAIL_SINK_TOKEN: mailSinkToken.optional(),
   /** Sign-in and sign-up attempts allowed per client address per window. */
   AUTH_RATE_LIMIT_MAX: z.coerce.number().int().positive().default(10),
   /** Length of that window, seconds. */
@@ -44,6 +52,9 @@ const envSchema = z.object({
   DATASET_MAX_BYTES: z.coerce.number().int().positive().default(26_214_400),
   /** Largest number of points (energies) in one dataset. */
   DATASET_MAX_POINTS: z.coerce.number().int().positive().default(500_000),
+}).refine((parsed) => parsed.MAIL_SINK_URL === undefined || parsed.MAIL_SINK_TOKEN !== undefined, {
+  path: ["MAIL_SINK_TOKEN"],
+  error: "MAIL_SINK_TOKEN is required when MAIL_SINK_URL is set (the sink refuses requests without it)",
 });
 
 export type Env = z.infer<typeof envSchema>;
@@ -73,10 +84,12 @@ const mailSinkEnvSchema = z.object({
   MAIL_SINK_SMTP_PORT: port.default(2525),
   /** Port the sink lists its messages on over HTTP (127.0.0.1). */
   MAIL_SINK_HTTP_PORT: port.default(2526),
+  /** The sink answers 401 to every HTTP request without `Authorization: Bearer <this token>`. */
+  MAIL_SINK_TOKEN: mailSinkToken,
 });
 export type MailSinkEnv = z.infer<typeof mailSinkEnvSchema>;
 
-/** The mail sink's ports; the sink process needs nothing else, so it calls this instead of reading `env`. */
+/** The mail sink's ports and token; the sink process needs nothing else, so it calls this instead of reading `env`. */
 export function parseMailSinkEnv(): MailSinkEnv {
   return parseOrExplain(mailSinkEnvSchema);
 }

@@ -14,7 +14,7 @@ const lines = [
       ]
     : ["The demo workspace was not seeded (SEED_DEMO=1 seeds it)."]),
   "",
-  env.MAIL_SINK_URL ? `E-mails are kept by the local sink: ${env.APP_URL}/dev/mail` : "E-mails go to SMTP_URL.",
+  env.MAIL_SINK_URL ? `E-mails are kept by the local sink; signed in, read yours at ${env.APP_URL}/dev/mail` : "E-mails go to SMTP_URL.",
   "Press Ctrl-C to stop.",
   "",
 ];

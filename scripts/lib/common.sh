@@ -45,17 +45,25 @@ load_dotenv_defaults() {
   done <"$file"
 }
 
-# The session secret: one given in the environment is used as it is. Otherwise .env.local (git-ignored)
-# provides it; a development secret is generated into that file the first time (an empty or too short
-# value counts as missing). Then the rest of .env.local fills in whatever the environment leaves unset.
-ensure_local_env() {
-  local file=${1:-.env.local}
-  if [ -z "${BETTER_AUTH_SECRET:-}" ] && [ "$(dotenv_value "$file" BETTER_AUTH_SECRET | wc -c)" -lt 32 ]; then
-    log "generating a development session secret into $file"
+# ensure_local_secret FILE KEY WHAT: a KEY given in the environment is used as it is. Otherwise FILE
+# provides it; 32 random bytes (64 hex digits) are generated into that file the first time (an empty or
+# too short value counts as missing).
+ensure_local_secret() {
+  local file=$1 key=$2 what=$3
+  if [ -z "${!key:-}" ] && [ "$(dotenv_value "$file" "$key" | wc -c)" -lt 32 ]; then
+    log "generating $what into $file"
     # Never glue the new line onto a last line that has no newline.
     if [ -s "$file" ] && [ -n "$(tail -c1 "$file")" ]; then echo >>"$file"; fi
-    printf 'BETTER_AUTH_SECRET=%s\n' "$(od -An -tx1 -N32 /dev/urandom | tr -d ' \n')" >>"$file"
+    printf '%s=%s\n' "$key" "$(od -An -tx1 -N32 /dev/urandom | tr -d ' \n')" >>"$file"
   fi
+}
+
+# The session secret and the mail sink's token (see ensure_local_secret), then the rest of .env.local
+# fills in whatever the environment leaves unset.
+ensure_local_env() {
+  local file=${1:-.env.local}
+  ensure_local_secret "$file" BETTER_AUTH_SECRET "a development session secret"
+  ensure_local_secret "$file" MAIL_SINK_TOKEN "a token for the local mail sink"
   load_dotenv_defaults "$file"
 }
 

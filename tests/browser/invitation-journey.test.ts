@@ -26,7 +26,10 @@ async function signUp(page: Page, person: typeof owner) {
   await page.getByRole("button", { name: "Create account" }).click();
 }
 
-/** The invitation link for `email` from the development mail page, reloading until it has arrived. */
+/**
+ * The invitation link for `email` from the development mail page, reloading until it has arrived. The
+ * page must be signed in as `email`: /dev/mail shows each user only their own mail.
+ */
 async function invitationLinkFromMailPage(page: Page, email: string): Promise<string> {
   const link = page.locator("article", { hasText: email }).locator('a[href*="/invitations/"]').first();
   for (let attempt = 0; attempt < 20; attempt += 1) {
@@ -94,18 +97,30 @@ describe("sign-up, workspace, invitation and viewer access in the browser", () =
     await page.context().close();
   });
 
-  it("lets the colleague follow the e-mailed link, sign up, accept, and see the workspace read-only", async () => {
+  it("lets the colleague sign up from the development mail page, follow the e-mailed link, accept, and see the workspace read-only", async () => {
     expect(workspacePath).not.toBe("");
     const page = await newIsolatedPage(browser, problems);
+    // Signed out, /dev/mail first asks who is reading: it shows each user only the mail sent to them.
+    await page.goto("/dev/mail");
+    await page.waitForURL(/\/sign-in\?next=%2Fdev%2Fmail$/);
+    await page.getByRole("link", { name: "Create an account" }).click();
+    await page.waitForURL(/\/sign-up\?next=%2Fdev%2Fmail$/);
+    await signUp(page, colleague);
+    await page.waitForURL(/\/dev\/mail$/);
     const invitationUrl = await invitationLinkFromMailPage(page, colleague.email);
+    expect(await page.getByRole("article").count()).toBe(1);
     await screenshot(page, "06-dev-mail");
 
+    // The same link opened signed out says nothing about the workspace and offers a way back to it.
+    const signedOut = await newIsolatedPage(browser, problems);
+    await signedOut.goto(invitationUrl);
+    await signedOut.getByRole("heading", { name: "You have been invited to a Bandwright workspace" }).waitFor();
+    expect(await signedOut.getByText(workspaceName).count()).toBe(0);
+    expect(await signedOut.getByRole("link", { name: "Create an account" }).getAttribute("href")).toMatch(/^\/sign-up\?next=%2Finvitations%2F/);
+    await screenshot(signedOut, "07-invitation-signed-out");
+    await signedOut.context().close();
+
     await page.goto(invitationUrl);
-    await screenshot(page, "07-invitation-signed-out");
-    await page.getByRole("link", { name: "Create an account" }).click();
-    await page.waitForURL("**/sign-up?next=*");
-    await signUp(page, colleague);
-    await page.waitForURL("**/invitations/**");
     await page.getByRole("heading", { name: `Join ${workspaceName}` }).waitFor();
     await screenshot(page, "08-invitation-accept");
     await page.getByRole("button", { name: "Accept and open the workspace" }).click();

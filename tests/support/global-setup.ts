@@ -1,21 +1,24 @@
 import { spawn, type ChildProcess } from "node:child_process";
+import { randomBytes } from "node:crypto";
 import { existsSync } from "node:fs";
 import type { TestProject } from "vitest/node";
 import { freePort } from "./free-port";
 
 // Starts the built app, the worker and the mail sink for the integration and browser projects, against
-// the test database in DATABASE_URL (scripts/test.sh creates it). Tests read the addresses with
-// inject("baseUrl") and inject("mailSinkUrl") from vitest (process.env.BASE_URL is Vite's base path inside
-// test files). Both projects share one set of processes: the second project's setup reuses them.
+// the test database in DATABASE_URL (scripts/test.sh creates it). Tests read the addresses and the sink's
+// per-run bearer token with inject("baseUrl"), inject("mailSinkUrl") and inject("mailSinkToken") from vitest
+// (process.env.BASE_URL is Vite's base path inside test files). Both projects share one set of processes:
+// the second project's setup reuses them.
 
 declare module "vitest" {
   export interface ProvidedContext {
     baseUrl: string;
     mailSinkUrl: string;
+    mailSinkToken: string;
   }
 }
 
-type Stack = { baseUrl: string; mailSinkUrl: string; children: ChildProcess[]; users: number };
+type Stack = { baseUrl: string; mailSinkUrl: string; mailSinkToken: string; children: ChildProcess[]; users: number };
 const globalForStack = globalThis as typeof globalThis & { bandwrightTestStack?: Promise<Stack> };
 
 function start(command: string, args: string[], env: NodeJS.ProcessEnv, label: string): ChildProcess {
@@ -67,6 +70,8 @@ async function startStack(): Promise<Stack> {
   const [appPort, smtpPort, sinkHttpPort] = [await freePort(), await freePort(), await freePort()];
   const baseUrl = `http://127.0.0.1:${appPort}`;
   const mailSinkUrl = `http://127.0.0.1:${sinkHttpPort}`;
+  // A fresh token per run: the sink answers only requests that carry it (tests/support/mail.ts does).
+  const mailSinkToken = randomBytes(32).toString("hex");
   const env: NodeJS.ProcessEnv = {
     ...process.env,
     NODE_ENV: "production",
@@ -76,6 +81,7 @@ async function startStack(): Promise<Stack> {
     MAIL_SINK_URL: mailSinkUrl,
     MAIL_SINK_SMTP_PORT: String(smtpPort),
     MAIL_SINK_HTTP_PORT: String(sinkHttpPort),
+    MAIL_SINK_TOKEN: mailSinkToken,
     // The tests connect from 127.0.0.1 and act as many clients through X-Forwarded-For (tests/support/
     // client.ts), so this one proxy is trusted here; production trusts none unless configured.
     TRUSTED_PROXIES: "127.0.0.1",
@@ -85,7 +91,7 @@ async function startStack(): Promise<Stack> {
     { label: "worker", child: start("node_modules/.bin/tsx", ["workers/main.ts"], env, "worker") },
     { label: "app", child: start("node_modules/.bin/tsx", ["scripts/serve-app.ts", String(appPort)], env, "app") },
   ];
-  const stack: Stack = { baseUrl, mailSinkUrl, children: labelled.map(({ child }) => child), users: 0 };
+  const stack: Stack = { baseUrl, mailSinkUrl, mailSinkToken, children: labelled.map(({ child }) => child), users: 0 };
   const exited = firstExit(labelled);
   const stopped = { done: false };
   try {
@@ -124,6 +130,7 @@ export default async function setup(project: TestProject) {
   stack.users += 1;
   project.provide("baseUrl", stack.baseUrl);
   project.provide("mailSinkUrl", stack.mailSinkUrl);
+  project.provide("mailSinkToken", stack.mailSinkToken);
   return async () => {
     stack.users -= 1;
     if (stack.users === 0) {

@@ -3,21 +3,25 @@ import { notFound } from "next/navigation";
 import { formatDateTime, linkSegments } from "@/components/format";
 import { Brand } from "@/components/shell/brand";
 import { EmptyState, Notice, PageHeader } from "@/components/ui";
-import { isMailSinkEnabled, listSinkMessages, type SinkMessage } from "@/lib/server/mail-sink";
+import { isMailSinkEnabled, listSinkMessagesFor, type SinkMessage } from "@/lib/server/mail-sink";
+import { requireUser } from "@/lib/server/session";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Development mail", robots: { index: false } };
 
 /**
- * Development only: the e-mails the local SMTP sink has caught, so a demo can follow invitation and
- * reset links. Without a configured sink (production) the page does not exist.
+ * Development only: the e-mails the local SMTP sink delivered to the signed-in user's own address, so a
+ * demo can follow invitation links. Never anyone else's mail, in any mode: the sink also holds other
+ * users' password-reset links. Signed out → sign-in, then back here. Without a configured sink
+ * (production) the page does not exist.
  */
 export default async function DevMailPage() {
   if (!isMailSinkEnabled()) notFound();
+  const user = await requireUser("/dev/mail");
   let messages: SinkMessage[] = [];
   let sinkDown = false;
   try {
-    messages = await listSinkMessages();
+    messages = await listSinkMessagesFor(user.email);
   } catch (error) {
     // A stopped sink is a development hiccup, not a broken page: say so and how to fix it.
     console.error(error);
@@ -30,8 +34,8 @@ export default async function DevMailPage() {
       </div>
       <PageHeader
         eyebrow="Development only"
-        title="Caught e-mail"
-        description="Every message the app sent to the local mail sink, newest first. Nothing here reaches a real inbox."
+        title="Your caught e-mail"
+        description={`The messages the app sent to ${user.email}, newest first, as the local mail sink caught them. Nothing here reaches a real inbox; other users' mail is never shown.`}
       />
       {sinkDown ? (
         <Notice tone="warning" title="The mail sink is not answering">
@@ -40,7 +44,7 @@ export default async function DevMailPage() {
       ) : messages.length === 0 ? (
         <EmptyState
           title="No e-mail yet"
-          description="Invite a member or request a password reset; the message shows up here. Reload the page to check again."
+          description="Invitations, password resets and fit notifications sent to your address show up here. Reload the page to check again."
         />
       ) : (
         <ol className="flex flex-col gap-4">

@@ -5,8 +5,8 @@ import { join } from "node:path";
 import { afterEach, describe, expect, it } from "vitest";
 
 // scripts/lib/common.sh's ensure_local_env, run by bash in a throw-away folder: the environment always
-// wins over .env.local, which is read literally (never executed), and a secret is generated only when
-// neither provides one.
+// wins over .env.local, which is read literally (never executed), and a secret (the session secret, the
+// mail sink's token) is generated only when neither provides one.
 
 const common = join(process.cwd(), "scripts/lib/common.sh");
 const folders: string[] = [];
@@ -32,10 +32,11 @@ function safeRead(path: string): string {
 
 describe("ensure_local_env", () => {
   const given = "from-the-environment-0123456789abcdef";
+  const sinkToken = "sink-token-from-the-environment-0123456789";
 
   it("keeps a BETTER_AUTH_SECRET, PORT and DATABASE_URL given in the environment", () => {
     const local = "BETTER_AUTH_SECRET=0123456789abcdef0123456789abcdef-local\nPORT=4000\nDATABASE_URL=postgres://a@127.0.0.1:1/x\n";
-    const { values, file } = run(local, { BETTER_AUTH_SECRET: given, PORT: "5000", DATABASE_URL: "postgres://b@127.0.0.1:2/y" }, [
+    const { values, file } = run(local, { BETTER_AUTH_SECRET: given, MAIL_SINK_TOKEN: sinkToken, PORT: "5000", DATABASE_URL: "postgres://b@127.0.0.1:2/y" }, [
       "BETTER_AUTH_SECRET",
       "PORT",
       "DATABASE_URL",
@@ -45,9 +46,21 @@ describe("ensure_local_env", () => {
   });
 
   it("generates no secret into .env.local when the environment has one", () => {
-    const { values, file } = run(null, { BETTER_AUTH_SECRET: given }, ["BETTER_AUTH_SECRET"]);
-    expect(values).toEqual([given]);
+    const { values, file } = run(null, { BETTER_AUTH_SECRET: given, MAIL_SINK_TOKEN: sinkToken }, ["BETTER_AUTH_SECRET", "MAIL_SINK_TOKEN"]);
+    expect(values).toEqual([given, sinkToken]);
     expect(file).toBe("");
+  });
+
+  it("generates a mail sink token once, kept across runs, and a different one from the session secret", () => {
+    const first = run(null, {}, ["BETTER_AUTH_SECRET", "MAIL_SINK_TOKEN"]);
+    const [secret, token] = first.values;
+    expect(token).toMatch(/^[0-9a-f]{64}$/);
+    expect(token).not.toBe(secret);
+    expect(first.file).toBe(`BETTER_AUTH_SECRET=${secret}\nMAIL_SINK_TOKEN=${token}\n`);
+    // Read again from the same file: nothing new is generated.
+    const again = run(first.file, {}, ["MAIL_SINK_TOKEN"]);
+    expect(again.values).toEqual([token]);
+    expect(again.file).toBe(first.file);
   });
 
   it("fills unset variables from .env.local, read literally with quotes removed", () => {
