@@ -1,6 +1,7 @@
 import type { Metadata, Viewport } from "next";
 import localFont from "next/font/local";
 import { GeistMono } from "geist/font/mono";
+import { connection } from "next/server";
 import type { ReactNode } from "react";
 import "./globals.css";
 
@@ -29,7 +30,10 @@ export const metadata: Metadata = {
 
 export const viewport: Viewport = { themeColor: "#1c5264" };
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  // Every page is rendered per request, none prerendered at build: Next can stamp each response's scripts
+  // with that request's CSP nonce only while rendering it (proxy.ts).
+  await connection();
   return (
     <html lang="en" className={`${interLatin.variable} ${interGreek.variable} ${GeistMono.variable}`}>
       <body className="min-h-screen">{children}</body>
