@@ -154,6 +154,18 @@ export async function getFit(params: { workspaceId: string; fitId: string }) {
   return { ...found, revisions };
 }
 
+/** The revision numbers of a workspace's fit, ascending, or null when the workspace has no such fit (one query). */
+export async function listRevisionNumbers(params: { workspaceId: string; fitId: string }): Promise<number[] | null> {
+  const rows = await db
+    .select({ number: fitRevision.number })
+    .from(fit)
+    .leftJoin(fitRevision, eq(fitRevision.fitId, fit.id))
+    .where(and(eq(fit.workspaceId, params.workspaceId), eq(fit.id, params.fitId)))
+    .orderBy(asc(fitRevision.number));
+  if (rows.length === 0) return null;
+  return rows.flatMap((row) => (row.number === null ? [] : [row.number]));
+}
+
 /** One revision of a workspace's fit (all columns, launcher's name and e-mail), or null. */
 export async function getRevision(params: { workspaceId: string; fitId: string; number: number }) {
   const rows = await db

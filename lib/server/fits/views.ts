@@ -7,10 +7,23 @@ import { type RevisionSnapshot, revisionSnapshotSchema } from "./snapshot";
 /** A stored result: the band fit result without its per-point residuals (those are rows). */
 export type StoredResult = Omit<BandFitResult, "residuals">;
 
+/** Revision numbers are stored as PostgreSQL `integer` (int4): 2³¹ − 1 at most (PostgreSQL 15 manual §8.1.1). */
+const maxRevisionNumber = 2_147_483_647;
+
+/**
+ * A revision number as written in a URL (decimal, no sign, no leading zero, 1 … 2³¹ − 1), or null. A larger
+ * one cannot exist, and passing it to the database would fail the query (a 500) instead of finding nothing.
+ */
+export function parseRevisionNumber(raw: unknown): number | null {
+  if (typeof raw !== "string" || !/^[1-9][0-9]{0,9}$/.test(raw)) return null;
+  const n = Number(raw);
+  return n <= maxRevisionNumber ? n : null;
+}
+
 /** Parses a revision number from the URL; anything else is a 404. */
 export function revisionNumber(raw: string | undefined): number {
-  const n = Number(raw);
-  if (!Number.isInteger(n) || n < 1 || String(n) !== raw) throw new AppError("not_found");
+  const n = parseRevisionNumber(raw);
+  if (n === null) throw new AppError("not_found");
   return n;
 }
 

@@ -1,19 +1,17 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { CompareView } from "@/components/fits/compare-view";
 import { PageHeader } from "@/components/ui";
+import { requireFitRevisions } from "@/lib/server/fits/fit-page-access";
 import { requireWorkspaceMember } from "@/lib/server/workspace-access";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Compare revisions" };
 
-export default async function ComparePage({ params, searchParams }: { params: Promise<{ slug: string; fitId: string }>; searchParams: Promise<{ a?: string; b?: string }> }) {
+export default async function ComparePage({ params, searchParams }: { params: Promise<{ slug: string; fitId: string }>; searchParams: Promise<{ a?: string | string[]; b?: string | string[] }> }) {
   const { slug, fitId } = await params;
   const query = await searchParams;
-  const a = Number(query.a);
-  const b = Number(query.b);
   const { workspace } = await requireWorkspaceMember(slug, "viewer");
-  if (![a, b].every((n) => Number.isInteger(n) && n >= 1)) notFound();
+  const [a, b] = await requireFitRevisions(workspace.id, fitId, [query.a, query.b]);
   return (
     <>
       <PageHeader title={`Revision ${a} and revision ${b}`} description="A is the first revision, B the second." />

@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { RevisionView } from "@/components/fits/revision-view";
 import { PageHeader } from "@/components/ui";
 import { hasRole } from "@/lib/auth/roles";
+import { requireFitRevisions } from "@/lib/server/fits/fit-page-access";
 import { requireWorkspaceMember } from "@/lib/server/workspace-access";
 
 export const dynamic = "force-dynamic";
@@ -11,8 +11,7 @@ export const metadata: Metadata = { title: "Revision" };
 export default async function RevisionPage({ params }: { params: Promise<{ slug: string; fitId: string; n: string }> }) {
   const { slug, fitId, n } = await params;
   const { workspace, role } = await requireWorkspaceMember(slug, "viewer");
-  const number = Number(n);
-  if (!Number.isInteger(number) || number < 1) notFound();
+  const [number] = await requireFitRevisions(workspace.id, fitId, [n]);
   return (
     <>
       <PageHeader title={`Revision ${number}`} />

@@ -1,17 +1,16 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { NewRevisionForm } from "@/components/fits/new-revision-form";
 import { PageHeader } from "@/components/ui";
+import { requireFitRevisions } from "@/lib/server/fits/fit-page-access";
 import { requireWorkspaceMember } from "@/lib/server/workspace-access";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "New revision" };
 
-export default async function NewRevisionPage({ params, searchParams }: { params: Promise<{ slug: string; fitId: string }>; searchParams: Promise<{ from?: string }> }) {
+export default async function NewRevisionPage({ params, searchParams }: { params: Promise<{ slug: string; fitId: string }>; searchParams: Promise<{ from?: string | string[] }> }) {
   const { slug, fitId } = await params;
-  const from = Number((await searchParams).from);
   const { workspace } = await requireWorkspaceMember(slug, "editor");
-  if (!Number.isInteger(from) || from < 1) notFound();
+  const [from] = await requireFitRevisions(workspace.id, fitId, [(await searchParams).from]);
   return (
     <>
       <PageHeader title={`New revision from revision ${from}`} description="Free or fix parameters, change the window or the weights, and launch again." />
