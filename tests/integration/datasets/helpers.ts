@@ -9,8 +9,6 @@ import type { TestResponse } from "@/tests/support/client";
 import { createTeam, type Team } from "@/tests/support/workspace";
 
 const fixturesFolder = fileURLToPath(new URL("../../../fixtures/", import.meta.url));
-/** ../shared/data relative to the repository root (never an absolute path). */
-export const sharedDataFolder = fileURLToPath(new URL("../../../../shared/data/", import.meta.url));
 
 export const fixtureBytes = (name: string) => new Uint8Array(readFileSync(`${fixturesFolder}${name}`));
 export const fixtureMappings = JSON.parse(readFileSync(`${fixturesFolder}mappings.json`, "utf8")) as Record<string, DatasetMappingInput>;

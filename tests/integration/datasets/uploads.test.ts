@@ -4,7 +4,8 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { createHash } from "node:crypto";
 import { HARTREE_IN_EV } from "@/lib/units";
 import type { Vec3 } from "@/lib/tb";
-import { createUploadTeam, fixtureBytes, fixtureMappings, sharedDataFolder, storedRows, upload, type UploadTeam } from "./helpers";
+import { createUploadTeam, fixtureBytes, fixtureMappings, storedRows, upload, type UploadTeam } from "./helpers";
+import { dftDataPath } from "@/tests/support/dft-data";
 
 type Accepted = { id: string; pointCount: number; bandCount: number; warnings: string[] };
 type Point = { index: number; row: number; kx: number; ky: number; kz: number; band: number; energy: number; sigma: number | null; label: string | null; pathDistance: number };
@@ -121,8 +122,8 @@ describe("fixture uploads", () => {
 describe("the real silicon DFT file", () => {
   // Source: all-electron PBE band structure of Si computed with Elk 8.4.30 (shared/data): 240 k-points × 12
   // bands; k_frac in the basis of the JSON's reciprocal lattice, k_cart in 1/Å with 2π included.
-  const bytes = new Uint8Array(readFileSync(`${sharedDataFolder}silicon-pbe-bands.csv`));
-  const info = JSON.parse(readFileSync(`${sharedDataFolder}silicon-pbe-bands.json`, "utf8")) as { "lattice_vectors_angstrom (rows a1,a2,a3)": Vec3[] };
+  const bytes = new Uint8Array(readFileSync(dftDataPath("silicon-pbe-bands.csv")));
+  const info = JSON.parse(readFileSync(dftDataPath("silicon-pbe-bands.json"), "utf8")) as { "lattice_vectors_angstrom (rows a1,a2,a3)": Vec3[] };
   const base = { name: "Si PBE", source: "calculation", format: "long", band: { column: "band" }, energy: { column: "energy_eV", unit: "eV" } };
 
   it("gives the same points with Cartesian k and with reduced k plus the lattice", async () => {

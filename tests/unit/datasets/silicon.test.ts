@@ -1,15 +1,14 @@
 import { createReadStream, readFileSync } from "node:fs";
-import { fileURLToPath } from "node:url";
 import { beforeAll, describe, expect, it } from "vitest";
 import { type DataPoint, type DispersionParseResult, datasetMappingSchema, parseDispersionFile } from "@/lib/datasets";
 import type { Vec3 } from "@/lib/tb/geometry/vec3";
+import { dftDataPath } from "@/tests/support/dft-data";
 
 // Source: all-electron PBE band structure of Si computed with Elk 8.4.30 (shared/data): 240 k-points along
 // L–Γ–X–W–K–Γ × 12 bands, k_frac in the basis of the JSON's reciprocal lattice, k_cart in 1/Å with 2π,
-// path_distance = cumulative |Δk| in 1/Å. Located relative to the repository (../shared from the root).
-const dataFolder = fileURLToPath(new URL("../../../../shared/data/", import.meta.url));
-const csvPath = `${dataFolder}silicon-pbe-bands.csv`;
-const info = JSON.parse(readFileSync(`${dataFolder}silicon-pbe-bands.json`, "utf8")) as {
+// path_distance = cumulative |Δk| in 1/Å (tests/data/dft).
+const csvPath = dftDataPath("silicon-pbe-bands.csv");
+const info = JSON.parse(readFileSync(dftDataPath("silicon-pbe-bands.json"), "utf8")) as {
   "lattice_vectors_angstrom (rows a1,a2,a3)": Vec3[];
   kpath: { label: string; k_frac: number[]; path_distance_1_per_angstrom: number }[];
   n_kpoints: number;

@@ -1,11 +1,11 @@
 // The shared real Si band file, read through the product's own parser. Source: all-electron PBE band
-// structure of Si computed with Elk 8.4.30 (shared/data, see its README).
+// structure of Si computed with Elk 8.4.30 (tests/data/dft, see its README).
 import { readFile } from "node:fs/promises";
-import { fileURLToPath } from "node:url";
 import { datasetMappingSchema, parseDispersionFile } from "@/lib/datasets";
 import type { DataPoint } from "@/lib/datasets";
+import { dftDataPath } from "@/tests/support/dft-data";
 
-const FILE = fileURLToPath(new URL("../../../../shared/data/silicon-pbe-bands.csv", import.meta.url));
+const FILE = dftDataPath("silicon-pbe-bands.csv");
 
 /** The 240 k × 12 bands of the file as data points (Cartesian k, 1/Å; energies in eV from the VBM). */
 export async function siliconDftPoints(): Promise<DataPoint[]> {

@@ -1,7 +1,7 @@
 import { readFileSync } from "node:fs";
-import { fileURLToPath } from "node:url";
 import { describe, expect, it } from "vitest";
 import { checkFrame } from "@/lib/server/fits/frame-check";
+import { dftDataPath } from "@/tests/support/dft-data";
 import { type ModelDocument, type Vec3, add, buildTemplate, kPathVertices, norm, reciprocalLattice, templateKPath } from "@/lib/tb";
 
 const honeycomb = buildTemplate("honeycomb-pz");
@@ -75,7 +75,7 @@ describe("checkFrame", () => {
 
   it("accepts the real Si data, also turned into a point-group image of the template's frame", () => {
     // all-electron PBE band structure of Si computed with Elk 8.4.30 (shared/data): L–Γ–X–W–K–Γ
-    const file = fileURLToPath(new URL("../../../../shared/data/silicon-pbe-bands.json", import.meta.url));
+    const file = dftDataPath("silicon-pbe-bands.json");
     const info = JSON.parse(readFileSync(file, "utf8")) as {
       kpath: { label: string; k_cart_1_per_angstrom: Vec3; path_distance_1_per_angstrom: number }[];
     };
