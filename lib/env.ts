@@ -46,8 +46,14 @@ const envSchema = z.object({
   WORKER_MAINTENANCE_INTERVAL_SECONDS: z.coerce.number().int().min(1).default(30),
   /** Name a worker records on the revisions it runs; unset: host:pid. */
   WORKER_NAME: z.string().min(1).optional(),
-  /** Added to a fit's time limit to give its job's expiry (after which a dead worker's fit is retried), seconds. */
+  /** Added to a fit's time limit to give its queue job's expiry (pg-boss's own bookkeeping), seconds. */
   FIT_JOB_EXPIRY_MARGIN_SECONDS: z.coerce.number().int().min(1).default(15),
+  /**
+   * A running fit whose heartbeat (written every few seconds by its worker) is older than this is taken as
+   * abandoned: a worker's sweeper hands it back to the queue, and Cancel ends it at once. Seconds; the app
+   * and every worker must agree.
+   */
+  FIT_HEARTBEAT_STALE_SECONDS: z.coerce.number().min(2).max(3600).default(15),
   /** Largest dataset file accepted, bytes (25 MiB). */
   DATASET_MAX_BYTES: z.coerce.number().int().positive().default(26_214_400),
   /** Largest number of points (energies) in one dataset. */

@@ -41,12 +41,16 @@ if [ -z "${TEST_DATABASE_URL:-}" ]; then
   OWN_POSTGRES=$PG_STARTED_HERE
   ensure_database "$PG_DATA" "$PG_PORT" bandwright_test recreate
   export DATABASE_URL="postgres://postgres@127.0.0.1:$PG_PORT/bandwright_test"
+  # The fault tests stop and restart this server (tests/support/test-postgres.ts); only this private one.
+  export TEST_PG_CONTROL_DATA=$PG_DATA TEST_PG_CONTROL_PORT=$PG_PORT
 else
   log "using TEST_DATABASE_URL (its tables are dropped and re-created)"
   export DATABASE_URL=$TEST_DATABASE_URL
   node_modules/.bin/tsx scripts/reset-database.ts
 fi
 
+# Abandoned fits are handed back after 6 s instead of 15 s (every process of the run reads it).
+export FIT_HEARTBEAT_STALE_SECONDS=${FIT_HEARTBEAT_STALE_SECONDS:-6}
 # The global set-up replaces these with the addresses of the processes it starts; the build needs values.
 export APP_URL=http://127.0.0.1:3999
 export SMTP_URL=smtp://127.0.0.1:2599

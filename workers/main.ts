@@ -9,54 +9,85 @@ import {
   fitDeadLetterQueue,
   fitQueue,
   healthQueue,
+  heartbeatIntervalMs,
   queueSchema,
 } from "@/lib/server/queues";
-import { failAbandonedRevision, runFitJob } from "./fit-job";
+import { failureLog } from "./database-outage";
+import { failUnstartedRevision, runFitJob } from "./fit-job";
+import { handBack } from "./hand-back";
+import { startHeartbeat } from "./heartbeat";
+import { startJobLoop } from "./job-loop";
+import { startSweeper } from "./sweeper";
 
 // The background worker: started with tsx (`tsx workers/main.ts`). It answers health probes, runs fit
-// revisions (WORKER_FIT_CONCURRENCY at a time) and ends abandoned ones; several workers share the queues.
+// revisions (WORKER_FIT_CONCURRENCY at a time) with a heartbeat, hands back the revisions of runners that
+// are gone, and ends revisions whose jobs never started; several workers share the queues. It keeps
+// running through a database outage and carries on when the database is back.
 
 const workerName = env.WORKER_NAME ?? `${hostname()}:${process.pid}`;
+const label = `worker ${workerName}`;
+const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
+
+// The known rejections are handled where they arise; anything a library still leaves unhandled is logged
+// and the worker carries on (every state it changes is guarded in the database).
+process.on("unhandledRejection", (reason) => console.error(`${label}: unhandled rejection (the worker carries on):`, reason));
 
 async function main(): Promise<void> {
   const boss = new PgBoss({
     connectionString: env.DATABASE_URL,
     schema: queueSchema,
-    // Expired jobs of a dead worker return to the queue at the next maintenance pass (pg-boss 10 has no
-    // heartbeat), so passes run often (30 s by default; tests use 1–2 s).
+    // Maintenance expires jobs left active by a dead worker (pg-boss bookkeeping; their revisions are the
+    // sweeper's). No cron schedules are used.
     maintenanceIntervalSeconds: env.WORKER_MAINTENANCE_INTERVAL_SECONDS,
+    schedule: false,
     max: env.WORKER_FIT_CONCURRENCY + 4,
   });
-  boss.on("error", (error) => console.error("worker: pg-boss error:", error));
+  const queueLog = failureLog(`${label}: pg-boss`);
+  boss.on("error", (error) => queueLog.failed(error));
+  boss.on("maintenance", () => queueLog.succeeded());
   await boss.start();
   await createQueues(boss);
 
-  // Resolving completes every job of the batch with this output.
-  await boss.work(healthQueue.name, { pollingIntervalSeconds: 0.5, batchSize: 5 }, async (): Promise<HealthJobOutput> => ({
-    worker: workerName,
-    answeredAt: new Date().toISOString(),
-  }));
+  const staleSeconds = env.FIT_HEARTBEAT_STALE_SECONDS;
+  const beatMs = heartbeatIntervalMs(staleSeconds);
+  const heartbeat = startHeartbeat(beatMs, label);
+  const context = {
+    runner: workerName,
+    appUrl: env.APP_URL,
+    heartbeat,
+    handBack: (revisionId: string, attempt: number) => handBack(boss, revisionId, { attempt }, { label, appUrl: env.APP_URL }),
+  };
 
-  // One poller per concurrent fit; each takes one job at a time, so a fit's failure retries only itself.
-  const context = { runner: workerName, appUrl: env.APP_URL };
-  for (let i = 0; i < env.WORKER_FIT_CONCURRENCY; i++) {
-    await boss.work<FitJobData>(fitQueue.name, { pollingIntervalSeconds: 0.5, batchSize: 1 }, async ([job]) => {
-      const outcome = await runFitJob(job.data.revisionId, context);
-      console.log(`worker ${workerName}: revision ${outcome.revisionId} ${outcome.outcome} (attempt ${outcome.attempt ?? "-"})`);
-      return outcome;
-    });
-  }
-  await boss.work<FitJobData>(fitDeadLetterQueue.name, { pollingIntervalSeconds: 1, batchSize: 5 }, async (jobs) => {
-    for (const job of jobs) await failAbandonedRevision(job.data.revisionId, env.APP_URL);
-  });
-  console.log(`worker ${workerName}: listening (${env.WORKER_FIT_CONCURRENCY} fit slots)`);
+  const loops = [
+    startJobLoop(boss, { queue: healthQueue.name, batchSize: 5, intervalMs: 500, label }, async (): Promise<HealthJobOutput> => ({
+      worker: workerName,
+      answeredAt: new Date().toISOString(),
+    })),
+    // One loop per concurrent fit; each takes one job at a time, so a fit's failure retries only itself.
+    ...Array.from({ length: env.WORKER_FIT_CONCURRENCY }, () =>
+      startJobLoop<FitJobData>(boss, { queue: fitQueue.name, batchSize: 1, intervalMs: 500, label }, async ([job]) => {
+        const outcome = await runFitJob(job.data.revisionId, context);
+        console.log(`${label}: revision ${outcome.revisionId} ${outcome.outcome} (attempt ${outcome.attempt ?? "-"})`);
+        return outcome;
+      }),
+    ),
+    startJobLoop<FitJobData>(boss, { queue: fitDeadLetterQueue.name, batchSize: 5, intervalMs: 1000, label }, async (jobs) => {
+      for (const job of jobs) await failUnstartedRevision(job.data.revisionId, env.APP_URL);
+    }),
+  ];
+  const sweeper = startSweeper({ boss, intervalMs: beatMs, staleSeconds, label, appUrl: env.APP_URL });
+  console.log(`${label}: listening (${env.WORKER_FIT_CONCURRENCY} fit slots)`);
 
   let stopping = false;
   const stop = async (signal: string) => {
     if (stopping) return;
     stopping = true;
-    console.log(`worker ${workerName}: ${signal}, finishing current jobs`);
-    await boss.stop({ graceful: true, wait: true, timeout: 20_000 });
+    console.log(`${label}: ${signal}, finishing current jobs (at most 20 s)`);
+    sweeper.stop();
+    // A fit still running after that is handed back by another worker's sweeper once its heartbeat is stale.
+    await Promise.race([Promise.all(loops.map((loop) => loop.stop())), sleep(20_000)]);
+    await heartbeat.stop();
+    await boss.stop({ graceful: false, wait: true }).catch((error: unknown) => console.error(`${label}: pg-boss stop:`, error));
     await closeDatabase();
     process.exit(0);
   };
@@ -65,6 +96,6 @@ async function main(): Promise<void> {
 }
 
 main().catch((error: unknown) => {
-  console.error("worker: failed to start:", error);
+  console.error(`${label}: failed to start:`, error);
   process.exit(1);
 });

@@ -92,7 +92,11 @@ export function RevisionView({ slug, fitId, number, canEdit }: { slug: string; f
       </div>
       {running ? <ProgressPanel slug={slug} fitId={fitId} revision={r} canCancel={canEdit} /> : null}
       {r.status === "failed" ? <Notice tone="error" title="The fit failed">{r.failureReason ?? "No reason was recorded."}</Notice> : null}
-      {r.status === "cancelled" ? <Notice tone="warning" title="Cancelled">The fit was stopped; the results below are its best point so far.</Notice> : null}
+      {r.status === "cancelled" ? (
+        <Notice tone="warning" title="Cancelled">
+          {result ? "The fit was stopped; the results below are its best point so far." : "The fit was cancelled before it stored a result."}
+        </Notice>
+      ) : null}
       {r.launchWarnings.length ? (
         <Notice tone="warning" title="Checks before the fit">
           <ul className="list-disc pl-4">

@@ -1,6 +1,8 @@
-import { and, asc, desc, eq, inArray, max, sql } from "drizzle-orm";
+import { and, asc, desc, eq, max, or, sql } from "drizzle-orm";
 import { randomUUID } from "node:crypto";
 import { db } from "@/db/client";
+import { heartbeatStale } from "@/db/queries/fit-attempts";
+import { type QueueSql, queueSqlIn } from "@/db/queue-sql";
 import { type NewFitResidual, type RevisionStatus, dataset, fit, fitResidual, fitRevision, organization, user } from "@/db/schema";
 
 // Fits and their revisions: creation, reads for the routes, and the guarded writes of the worker.
@@ -9,7 +11,16 @@ import { type NewFitResidual, type RevisionStatus, dataset, fit, fitResidual, fi
 
 type LaunchWarning = { kind: string; message: string };
 
-/** Creates a fit and its revision 1 (status queued) in one transaction. */
+/**
+ * Sends a new revision's queue job through `queue` (pg-boss's way into the revision's own transaction) and
+ * returns the job's id; throws when the queue does not take it, which rolls the revision back.
+ */
+export type SendRevisionJob = (revisionId: string, queue: QueueSql) => Promise<string>;
+
+/**
+ * Creates a fit, its revision 1 (status queued) and the revision's job in one transaction: all three
+ * or nothing.
+ */
 export async function createFitWithFirstRevision(params: {
   workspaceId: string;
   datasetId: string;
@@ -18,6 +29,7 @@ export async function createFitWithFirstRevision(params: {
   launchedBy: string;
   inputs: unknown;
   launchWarnings: LaunchWarning[];
+  sendJob: SendRevisionJob;
 }): Promise<{ fitId: string; revisionId: string; number: number }> {
   const fitId = randomUUID();
   const revisionId = randomUUID();
@@ -38,17 +50,23 @@ export async function createFitWithFirstRevision(params: {
       launchedBy: params.launchedBy,
       launchWarnings: params.launchWarnings,
     });
+    const jobId = await params.sendJob(revisionId, queueSqlIn(tx));
+    await tx.update(fitRevision).set({ jobId }).where(eq(fitRevision.id, revisionId));
   });
   return { fitId, revisionId, number: 1 };
 }
 
-/** Adds the next revision of a fit (number = highest + 1, the fit row locked meanwhile). */
+/**
+ * Adds the next revision of a fit (number = highest + 1, the fit row locked meanwhile) and its job, in
+ * one transaction.
+ */
 export async function createNextRevision(params: {
   fitId: string;
   parentNumber: number;
   launchedBy: string;
   inputs: unknown;
   launchWarnings: LaunchWarning[];
+  sendJob: SendRevisionJob;
 }): Promise<{ revisionId: string; number: number }> {
   const revisionId = randomUUID();
   const number = await db.transaction(async (tx) => {
@@ -64,22 +82,11 @@ export async function createNextRevision(params: {
       launchedBy: params.launchedBy,
       launchWarnings: params.launchWarnings,
     });
+    const jobId = await params.sendJob(revisionId, queueSqlIn(tx));
+    await tx.update(fitRevision).set({ jobId }).where(eq(fitRevision.id, revisionId));
     return next;
   });
   return { revisionId, number };
-}
-
-/** Records the queue job of a revision. */
-export async function setRevisionJob(params: { revisionId: string; jobId: string }): Promise<void> {
-  await db.update(fitRevision).set({ jobId: params.jobId }).where(eq(fitRevision.id, params.revisionId));
-}
-
-/** Marks a revision failed before any worker saw it (e.g. the queue refused the job). */
-export async function failQueuedRevision(params: { revisionId: string; reason: string }): Promise<void> {
-  await db
-    .update(fitRevision)
-    .set({ status: "failed", failureReason: params.reason, finishedAt: new Date() })
-    .where(and(eq(fitRevision.id, params.revisionId), eq(fitRevision.status, "queued")));
 }
 
 const revisionSummaryColumns = {
@@ -180,24 +187,36 @@ export async function getRevision(params: { workspaceId: string; fitId: string; 
 export type RevisionDetails = NonNullable<Awaited<ReturnType<typeof getRevision>>>;
 
 /**
- * Cancels a revision: a queued one ends `cancelled` at once (no worker will start it); a running one gets
- * its cancel request stamped, which the worker polls. Returns the status after the request.
+ * Cancels a revision: a queued one ends `cancelled` at once (no worker will start it), and so does a
+ * running one whose runner is gone (heartbeat older than `staleSeconds`; it ends without a result, since
+ * only the runner knew its best point); a live running one gets its cancel request stamped, which its
+ * worker polls. Returns the status after the request.
  */
-export async function requestCancel(revisionId: string): Promise<RevisionStatus | null> {
-  const now = new Date();
-  const cancelledQueued = await db
+export async function requestCancel(params: { revisionId: string; staleSeconds: number }): Promise<RevisionStatus | null> {
+  const ended = await db
     .update(fitRevision)
-    .set({ status: "cancelled", cancelRequested: now, finishedAt: now, failureReason: null })
-    .where(and(eq(fitRevision.id, revisionId), eq(fitRevision.status, "queued")))
+    .set({
+      status: "cancelled",
+      cancelRequested: sql`coalesce(${fitRevision.cancelRequested}, now())`,
+      finishedAt: sql`now()`,
+      failureReason: null,
+      progress: null,
+    })
+    .where(
+      and(
+        eq(fitRevision.id, params.revisionId),
+        or(eq(fitRevision.status, "queued"), and(eq(fitRevision.status, "running"), heartbeatStale(params.staleSeconds))),
+      ),
+    )
     .returning({ status: fitRevision.status });
-  if (cancelledQueued[0]) return cancelledQueued[0].status;
+  if (ended[0]) return ended[0].status;
   const stamped = await db
     .update(fitRevision)
     .set({ cancelRequested: sql`coalesce(${fitRevision.cancelRequested}, now())` })
-    .where(and(eq(fitRevision.id, revisionId), eq(fitRevision.status, "running")))
+    .where(and(eq(fitRevision.id, params.revisionId), eq(fitRevision.status, "running")))
     .returning({ status: fitRevision.status });
   if (stamped[0]) return stamped[0].status;
-  const rows = await db.select({ status: fitRevision.status }).from(fitRevision).where(eq(fitRevision.id, revisionId));
+  const rows = await db.select({ status: fitRevision.status }).from(fitRevision).where(eq(fitRevision.id, params.revisionId));
   return rows[0]?.status ?? null;
 }
 
@@ -217,14 +236,22 @@ export async function getRevisionForRun(revisionId: string) {
 }
 
 /**
- * Starts an attempt: only a queued revision, or a running one whose previous attempt died (its job expired
- * and was retried), can be claimed. Returns the new attempt number, or null when the revision is final.
+ * Starts an attempt on a queued revision (a running one belongs to its runner until the sweeper hands it
+ * back): `attempts + 1`, the runner's name and a first heartbeat. Returns the new attempt number, or null
+ * when the revision is not queued.
  */
 export async function claimRevision(params: { revisionId: string; runner: string }): Promise<number | null> {
   const rows = await db
     .update(fitRevision)
-    .set({ status: "running", attempts: sql`${fitRevision.attempts} + 1`, runner: params.runner, startedAt: new Date(), progress: null })
-    .where(and(eq(fitRevision.id, params.revisionId), inArray(fitRevision.status, ["queued", "running"])))
+    .set({
+      status: "running",
+      attempts: sql`${fitRevision.attempts} + 1`,
+      runner: params.runner,
+      startedAt: sql`now()`,
+      heartbeatAt: sql`now()`,
+      progress: null,
+    })
+    .where(and(eq(fitRevision.id, params.revisionId), eq(fitRevision.status, "queued")))
     .returning({ attempts: fitRevision.attempts });
   return rows[0]?.attempts ?? null;
 }
@@ -287,12 +314,13 @@ export async function finishRevision(params: {
 
 /**
  * Ends a revision `failed` with a readable reason. With `attempt`, only while that attempt holds it;
- * without (the dead-letter path), whenever it is not final yet. Returns whether it changed anything.
+ * without (the dead-letter path: its job never got as far as a claim), only while it is still queued.
+ * Returns whether it changed anything.
  */
 export async function failRevision(params: { revisionId: string; reason: string; attempt?: number }): Promise<boolean> {
   const guard =
     params.attempt === undefined
-      ? and(eq(fitRevision.id, params.revisionId), inArray(fitRevision.status, ["queued", "running"]))
+      ? and(eq(fitRevision.id, params.revisionId), eq(fitRevision.status, "queued"))
       : heldBy(params.revisionId, params.attempt);
   const rows = await db
     .update(fitRevision)

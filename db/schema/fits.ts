@@ -61,6 +61,11 @@ export const fitRevision = pgTable(
     attempts: integer("attempts").notNull().default(0),
     /** name of the worker process that holds the current attempt (host:pid or WORKER_NAME) */
     runner: text("runner"),
+    /**
+     * database time of the running attempt's last sign of life, written every few seconds by its worker
+     * (workers/heartbeat.ts); a stale one means the runner is gone (the sweeper hands the revision back)
+     */
+    heartbeatAt: timestamp("heartbeat_at", { withTimezone: true }),
     /** checks at launch that did not refuse the fit (e.g. a k-frame mismatch), `{ kind, message }[]` */
     launchWarnings: jsonb("launch_warnings").$type<{ kind: string; message: string }[]>().notNull().default([]),
     launchedBy: text("launched_by").references(() => user.id, { onDelete: "set null" }),

@@ -1,5 +1,6 @@
 import "server-only";
 import PgBoss from "pg-boss";
+import { describeDatabaseError } from "@/db/connection-errors";
 import { env } from "@/lib/env";
 import { createQueues, healthQueue, queueSchema } from "./queues";
 
@@ -14,7 +15,7 @@ async function startQueue(): Promise<PgBoss> {
     supervise: false,
     schedule: false,
   });
-  boss.on("error", (error) => console.error("pg-boss:", error));
+  boss.on("error", (error) => console.error("pg-boss:", describeDatabaseError(error)));
   await boss.start();
   await createQueues(boss);
   return boss;

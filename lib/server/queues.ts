@@ -23,9 +23,10 @@ export const fitDeadLetterQueue = {
 } as const satisfies { name: string; options: PgBoss.Queue };
 
 /**
- * One job per revision. Retries cover a worker that died mid-fit: its job expires (pg-boss 10 has no
- * heartbeat), the next maintenance pass returns it, and the retried attempt restarts the revision. Each
- * job's own expiry is derived from the fit's time limit when it is sent ({@link fitJobExpirySeconds}).
+ * One job per revision, sent in the same transaction as the revision (`sendFitJob`). Its retries cover a
+ * handler that failed before it claimed the revision; after the last one the dead-letter queue ends a
+ * revision still queued. A claimed revision is watched through its heartbeat instead (workers/sweeper.ts):
+ * a dead runner's revision gets a new job, up to {@link fitMaxAttempts} attempts.
  */
 export const fitQueue = {
   name: "fit-revision",
@@ -35,14 +36,52 @@ export const fitQueue = {
 /** Data of a fit job. */
 export type FitJobData = { revisionId: string };
 
+/** Attempts (claims by a worker) a revision gets before a dead runner's revision ends `failed`. */
+export const fitMaxAttempts = 3;
+
+/**
+ * The longest expiry pg-boss 10 accepts, seconds: its check is `expireIn / 3600 < 24` (attorney.js,
+ * "expiration cannot exceed 24 hours"), so 24 h itself is refused.
+ */
+export const maxJobExpirySeconds = 86_399;
+
 /**
  * A fit job's expiry, seconds: the fit's own wall-clock limit (the engine stops there), plus a quarter for
- * loading and writing, plus a fixed margin; capped at pg-boss's 24 hours.
+ * loading and writing, plus a fixed margin; never above {@link maxJobExpirySeconds}. The longest time
+ * limit the launch accepts (19 h) keeps the quarter within it.
  * @param timeLimitMs - the fit's `timeLimitMs`, milliseconds
  * @param marginSeconds - fixed margin, seconds
  */
 export function fitJobExpirySeconds(timeLimitMs: number, marginSeconds: number): number {
-  return Math.min(86_400, Math.ceil((timeLimitMs / 1000) * 1.25 + marginSeconds));
+  return Math.min(maxJobExpirySeconds, Math.ceil((timeLimitMs / 1000) * 1.25 + marginSeconds));
+}
+
+/**
+ * Sends a revision's fit job through `db` (pg-boss's way into the caller's transaction, so the job
+ * commits with the revision) and returns its id.
+ * @throws when the queue does not take the job
+ */
+export async function sendFitJob(
+  boss: PgBoss,
+  params: { revisionId: string; timeLimitMs: number; marginSeconds: number; db: PgBoss.Db },
+): Promise<string> {
+  const data: FitJobData = { revisionId: params.revisionId };
+  const jobId = await boss.send(fitQueue.name, data, {
+    expireInSeconds: fitJobExpirySeconds(params.timeLimitMs, params.marginSeconds),
+    db: params.db,
+  });
+  if (!jobId) throw new Error(`the queue did not take the job of revision ${params.revisionId}`);
+  return jobId;
+}
+
+/**
+ * How often a running attempt's heartbeat is written, and a sweep for stale ones runs, milliseconds: a
+ * quarter of the staleness limit (so three missed beats in a row are still no false alarm), between
+ * 0.5 and 5 s.
+ * @param staleSeconds - `FIT_HEARTBEAT_STALE_SECONDS`
+ */
+export function heartbeatIntervalMs(staleSeconds: number): number {
+  return Math.min(5000, Math.max(500, (staleSeconds * 1000) / 4));
 }
 
 /** PostgreSQL's deadlock_detected: two processes creating the same queue's tables at once (seen at start-up). */

@@ -8,7 +8,7 @@ describe("GET /api/health", () => {
   it("reports the database and a live worker", async () => {
     const response = await new TestClient().get("/api/health");
     expect(response.status).toBe(200);
-    expect(response.body).toEqual({ ok: true, database: "up", queue: "up" });
+    expect(response.body).toEqual({ ok: true, database: "ok", worker: "ok" });
   });
 });
 

@@ -1,5 +1,6 @@
 export {
   DEFAULT_BAND_MAPPING,
+  MAX_FIT_TIME_LIMIT_MS,
   bandFitInputSchema,
   bandFitPointSchema,
   bandFitResultSchema,

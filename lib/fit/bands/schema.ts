@@ -129,6 +129,12 @@ const renormalisationSchema = z
   .strict();
 
 /**
+ * The longest time limit of a band fit, ms (19 h): a server-side fit's queue job expires after 1.25 × its
+ * limit plus a margin, and the job queue (pg-boss 10) refuses expiries of 24 h or more.
+ */
+export const MAX_FIT_TIME_LIMIT_MS = 68_400_000;
+
+/**
  * Options of a band fit. Every field is optional; the defaults below are filled once by the schema.
  * Per-point σ: with `sigma: "from-data"` a point's own σ (eV) is used and `uniformSigma` where it has
  * none; with `sigma: "uniform"` every point gets `uniformSigma`. A weight w (the point's own times its
@@ -138,8 +144,8 @@ export const fitOptionsSchema = z
   .object({
     /** Levenberg–Marquardt steps per start. Default 200. */
     maxIterations: z.int().min(1).max(100_000).default(200),
-    /** Wall-clock budget of the whole fit, all starts, ms. Default 60 000. */
-    timeLimitMs: z.number().positive().max(86_400_000).default(60_000),
+    /** Wall-clock budget of the whole fit, all starts, ms. Default 60 000; at most {@link MAX_FIT_TIME_LIMIT_MS}. */
+    timeLimitMs: z.number().positive().max(MAX_FIT_TIME_LIMIT_MS, "at most 68 400 000 ms (19 h)").default(60_000),
     /** Number of starts (the first is the model's own values; others drawn within bounds). Default 1. */
     starts: z.int().min(1).max(1000).default(1),
     /** Seed of the generator that draws extra starts. Default 1. */

@@ -1,6 +1,6 @@
 import "server-only";
 import { getDatasetForFit, loadDatasetPoints } from "@/db/queries/fit-data";
-import { createFitWithFirstRevision, createNextRevision, failQueuedRevision, setRevisionJob } from "@/db/queries/fits";
+import { type SendRevisionJob, createFitWithFirstRevision, createNextRevision } from "@/db/queries/fits";
 import {
   type BandFitIssue,
   type BandFitResult,
@@ -17,7 +17,7 @@ import { env } from "@/lib/env";
 import { type ModelDocument, ModelError } from "@/lib/tb";
 import { AppError } from "../errors";
 import { getQueue } from "../job-queue";
-import { type FitJobData, fitJobExpirySeconds, fitQueue } from "../queues";
+import { sendFitJob } from "../queues";
 import { type LaunchWarning, checkFrame } from "./frame-check";
 import type { LaunchFitInput, NewRevisionInput } from "./inputs";
 import { type RevisionSnapshot, revisionSnapshotSchema } from "./snapshot";
@@ -76,20 +76,26 @@ async function prepareSnapshot(request: RevisionRequest): Promise<{ snapshot: Re
   return { snapshot, warnings: checkFrame(dataset.summary.ticks, points, model) };
 }
 
-async function enqueue(revisionId: string, snapshot: RevisionSnapshot): Promise<void> {
-  const boss = await getQueue();
-  const data: FitJobData = { revisionId };
-  const jobId = await boss.send(fitQueue.name, data, {
-    expireInSeconds: fitJobExpirySeconds(snapshot.options.timeLimitMs, env.FIT_JOB_EXPIRY_MARGIN_SECONDS),
-  });
-  if (!jobId) {
-    await failQueuedRevision({ revisionId, reason: "The job queue did not accept the fit." });
+/**
+ * The job sender for a new revision: pg-boss is started before the revision's transaction opens, and a
+ * job the queue refuses (or a send that fails) rolls the revision back and answers 503.
+ */
+async function jobSender(snapshot: RevisionSnapshot): Promise<SendRevisionJob> {
+  const boss = await getQueue().catch((error: unknown) => {
+    console.error("fit launch: the job queue is unavailable:", error);
     throw new AppError("unavailable", "The job queue did not accept the fit; try again.");
-  }
-  await setRevisionJob({ revisionId, jobId });
+  });
+  return async (revisionId, queue) => {
+    try {
+      return await sendFitJob(boss, { revisionId, timeLimitMs: snapshot.options.timeLimitMs, marginSeconds: env.FIT_JOB_EXPIRY_MARGIN_SECONDS, db: queue });
+    } catch (error) {
+      console.error(`fit launch: revision ${revisionId}: the job was not sent:`, error);
+      throw new AppError("unavailable", "The job queue did not accept the fit; try again.");
+    }
+  };
 }
 
-/** Launches a new fit: checks, then the fit and its revision 1, then the job. */
+/** Launches a new fit: checks, then the fit, its revision 1 and the job, together. */
 export async function launchFit(params: { workspaceId: string; userId: string; input: LaunchFitInput }) {
   const { input } = params;
   const { snapshot, warnings } = await prepareSnapshot({ workspaceId: params.workspaceId, ...input });
@@ -101,8 +107,8 @@ export async function launchFit(params: { workspaceId: string; userId: string; i
     launchedBy: params.userId,
     inputs: snapshot,
     launchWarnings: warnings,
+    sendJob: await jobSender(snapshot),
   });
-  await enqueue(created.revisionId, snapshot);
   return { fitId: created.fitId, revision: created.number, warnings };
 }
 
@@ -171,7 +177,7 @@ export async function launchRevision(params: {
     launchedBy: params.userId,
     inputs: snapshot,
     launchWarnings: warnings,
+    sendJob: await jobSender(snapshot),
   });
-  await enqueue(created.revisionId, snapshot);
   return { fitId: params.fitId, revision: created.number, warnings };
 }

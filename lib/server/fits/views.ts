@@ -65,6 +65,7 @@ export function revisionView(details: RevisionDetails) {
     progress: revision.progress,
     attempts: revision.attempts,
     runner: revision.runner,
+    heartbeatAt: revision.heartbeatAt,
     failureReason: revision.failureReason,
     cancelRequested: revision.cancelRequested,
     launchedBy: details.launcherName,

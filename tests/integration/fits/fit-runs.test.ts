@@ -5,7 +5,7 @@ import { createFitWithFirstRevision, getRevision } from "@/db/queries/fits";
 import { getWorkspaceBySlug } from "@/db/queries/workspaces";
 import { env } from "@/lib/env";
 import { parameterSetSchema } from "@/lib/export";
-import { type FitJobData, fitQueue, queueSchema } from "@/lib/server/queues";
+import { queueSchema, sendFitJob } from "@/lib/server/queues";
 import { type Vec3, buildTemplate, compileModel, computeBands, templateKPath } from "@/lib/tb";
 import { listMail } from "@/tests/support/mail";
 import { type Team, createTeam } from "@/tests/support/workspace";
@@ -126,20 +126,20 @@ describe("a fit on a fixture dataset", () => {
     const workspace = await getWorkspaceBySlug(team.slug);
     const first = (await team.viewer.get(`${base()}/fits/${fitId}/revisions/1`)).body as { inputs: Record<string, unknown> };
     const me = (await team.editor.get("/api/auth/get-session")).body as { user: { id: string } };
-    const created = await createFitWithFirstRevision({
-      workspaceId: workspace!.id,
-      datasetId,
-      name: "graphene pz, empty window",
-      notes: "",
-      launchedBy: me.user.id,
-      inputs: { ...first.inputs, window: { min: 100, max: 101 } },
-      launchWarnings: [],
-    });
     const boss = new PgBoss({ connectionString: env.DATABASE_URL, schema: queueSchema, supervise: false, schedule: false });
     await boss.start();
+    let created: { fitId: string };
     try {
-      const data: FitJobData = { revisionId: created.revisionId };
-      expect(await boss.send(fitQueue.name, data)).toBeTruthy();
+      created = await createFitWithFirstRevision({
+        workspaceId: workspace!.id,
+        datasetId,
+        name: "graphene pz, empty window",
+        notes: "",
+        launchedBy: me.user.id,
+        inputs: { ...first.inputs, window: { min: 100, max: 101 } },
+        launchWarnings: [],
+        sendJob: (revisionId, queue) => sendFitJob(boss, { revisionId, timeLimitMs: 60_000, marginSeconds: 15, db: queue }),
+      });
     } finally {
       await boss.stop({ graceful: false });
     }

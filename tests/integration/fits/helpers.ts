@@ -5,7 +5,8 @@ import { type ChildProcess, spawn } from "node:child_process";
 import { createHash, randomUUID } from "node:crypto";
 import { db } from "@/db/client";
 import { getWorkspaceBySlug } from "@/db/queries/workspaces";
-import { dataset, datasetPoint } from "@/db/schema";
+import { sql } from "drizzle-orm";
+import { dataset, datasetPoint, fitRevision } from "@/db/schema";
 import { parseDispersionFile } from "@/lib/datasets";
 import { type ModelDocument, type Vec3, buildTemplate, compileModel, computeBands, templateKPath } from "@/lib/tb";
 import type { TestClient } from "@/tests/support/client";
@@ -181,4 +182,34 @@ export function stopWorker(child: ChildProcess, signal: NodeJS.Signals = "SIGTER
     child.once("exit", () => resolve());
     child.kill(signal);
   });
+}
+
+/**
+ * Writes revision `number` of a fit as if a worker had claimed it and then vanished: status running,
+ * `attempts` runs so far, a runner that no longer exists and a heartbeat `heartbeatAgeSeconds` old (no
+ * job in the queue). Returns the revision's id.
+ */
+export async function insertAbandonedRevision(params: {
+  fitId: string;
+  number: number;
+  inputs: unknown;
+  attempts: number;
+  heartbeatAgeSeconds: number;
+  cancelRequested?: boolean;
+}): Promise<string> {
+  const id = randomUUID();
+  await db.insert(fitRevision).values({
+    id,
+    fitId: params.fitId,
+    number: params.number,
+    inputs: params.inputs,
+    status: "running",
+    attempts: params.attempts,
+    runner: "vanished-worker:1",
+    startedAt: sql`now() - make_interval(secs => ${params.heartbeatAgeSeconds + 1})`,
+    heartbeatAt: sql`now() - make_interval(secs => ${params.heartbeatAgeSeconds})`,
+    cancelRequested: params.cancelRequested ? sql`now()` : null,
+    progress: { start: 0, starts: 1, iteration: 3, chiSquared: 1, elapsedMs: 900, updatedAt: new Date().toISOString() },
+  });
+  return id;
 }

@@ -1,0 +1,1 @@
+ALTER TABLE "fit_revision" ADD COLUMN "heartbeat_at" timestamp with time zone;
