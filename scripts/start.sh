@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # npm start: sets everything up on this machine and serves Bandwright on http://127.0.0.1:$PORT.
-# Ctrl-C stops everything this script started (PostgreSQL included when it started it). See README.md.
+# A process that dies is started again (scripts/supervise.ts); Ctrl-C stops everything this script started
+# (PostgreSQL included when it started it). See README.md.
 set -euo pipefail
 cd "$(dirname "$0")/.."
 . scripts/lib/common.sh
@@ -25,11 +26,11 @@ take_lock .data/start.lock "npm start" "$APP_URL"
 require_free_port "$PORT" "the app, PORT"
 
 OWN_POSTGRES=
-children=()
+SUPERVISOR=
 cleanup() {
   trap - INT TERM EXIT
-  for pid in "${children[@]}"; do kill -TERM "$pid" 2>/dev/null || true; done
-  for pid in "${children[@]}"; do wait "$pid" 2>/dev/null || true; done
+  # The supervisor passes the stop on to every child and exits once they all have.
+  if [ -n "$SUPERVISOR" ]; then kill -TERM "$SUPERVISOR" 2>/dev/null || true; wait "$SUPERVISOR" 2>/dev/null || true; fi
   if [ -n "$OWN_POSTGRES" ]; then stop_postgres "$PG_DATA"; fi
   log "stopped"
 }
@@ -63,22 +64,22 @@ log "building (next build)"
 BUILD_LOG="$PWD/.data/build.log"
 node "$(next_bin)" build >"$BUILD_LOG" 2>&1 || { tail -n 40 "$BUILD_LOG"; die "next build failed (full log: $BUILD_LOG)"; }
 
-if [ -n "${MAIL_SINK_URL:-}" ]; then
-  node_modules/.bin/tsx scripts/mail-sink.ts & children+=($!)
-fi
-node_modules/.bin/tsx workers/main.ts & children+=($!)
-NODE_ENV=production node_modules/.bin/tsx scripts/serve-app.ts "$PORT" & children+=($!)
+# The app, the worker and the sink run under scripts/supervise.ts, which starts a child again when it exits
+# (with back-off) and, when PostgreSQL is ours, starts it again too if it stops.
+children=(app worker)
+if [ -n "${MAIL_SINK_URL:-}" ]; then children+=(mail-sink); fi
+supervise=(node --import tsx scripts/supervise.ts --port "$PORT")
+if [ -n "$OWN_POSTGRES" ]; then supervise+=(--postgres-data "$PG_DATA" --postgres-port "$PG_PORT"); fi
+"${supervise[@]}" "${children[@]}" & SUPERVISOR=$!
 
 healthy=
 for _ in $(seq 1 90); do
-  for pid in "${children[@]}"; do
-    kill -0 "$pid" 2>/dev/null || die "a process stopped during start-up (see its messages above)"
-  done
+  kill -0 "$SUPERVISOR" 2>/dev/null || die "the supervisor stopped during start-up (see its messages above)"
   if http_ok "http://127.0.0.1:$PORT/api/health"; then healthy=1; break; fi
   sleep 1
 done
 [ -n "$healthy" ] || die "the app did not report healthy at http://127.0.0.1:$PORT/api/health within 90 s"
 
 node_modules/.bin/tsx scripts/print-welcome.ts "$SEED_DEMO"
-# Stop everything as soon as any one process ends (or on Ctrl-C, through the traps).
-wait -n "${children[@]}" || true
+# Runs until Ctrl-C (the traps stop the supervisor, then PostgreSQL); a child that dies is restarted.
+wait "$SUPERVISOR" || true
