@@ -101,7 +101,12 @@ function bandMapper(
     return () => -1;
   }
   if (bands.length === 0) return () => null;
-  const present = { low: Math.min(...bands), high: Math.max(...bands) };
+  // A loop, not Math.min(...bands): spreading hundreds of thousands of arguments overflows the stack.
+  const present = { low: bands[0], high: bands[0] };
+  for (const band of bands) {
+    if (band < present.low) present.low = band;
+    else if (band > present.high) present.high = band;
+  }
   const [first, last] = mapping.dataBands ?? [present.low, present.high];
   const lastModelBand = mapping.firstModelBand + (last - first);
   if (lastModelBand > modelBandCount)

@@ -23,6 +23,15 @@ describe("band mapping", () => {
     expect(result.rms).toBeLessThan(1e-6);
   });
 
+  it("validates a dataset of 300 000 points (no argument-spread limit on the band range)", () => {
+    // A chain s band (closed form ε − 2t cos ka: Ashcroft & Mermin, ch. 10) sampled at 300 000 k-points:
+    // the band range of that many points once overflowed the stack (Math.min over spread arguments).
+    const chain = buildTemplate("chain-s");
+    const points = syntheticPoints(chain, pathPoints(chain, 300_000), [1], 0, 1);
+    const validation = validateBandFit({ points, model: chain, mapping: { kind: "offset", firstModelBand: 1 } });
+    expect(validation.ok).toBe(true);
+  });
+
   it("refuses a mapping onto model bands that do not exist", () => {
     const truth = buildTemplate("honeycomb-pz");
     const validation = validateBandFit({
