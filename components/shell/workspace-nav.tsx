@@ -10,6 +10,7 @@ const sections = [
   { label: "Datasets", path: "/datasets" },
   { label: "Fits", path: "/fits" },
   { label: "Members", path: "/members" },
+  { label: "API keys", path: "/settings/api-keys" },
 ] as const;
 
 /** Tabs of one workspace; the current section is marked with aria-current for screen readers. */
@@ -17,7 +18,7 @@ export function WorkspaceNav({ slug }: { slug: string }) {
   const pathname = usePathname();
   const base = `/w/${encodeURIComponent(slug)}`;
   return (
-    <nav aria-label="Workspace" className="-mb-px flex gap-1">
+    <nav aria-label="Workspace" className="-mb-px flex flex-wrap gap-x-1">
       {sections.map((section) => {
         const href = `${base}${section.path}`;
         const current = section.path === "" ? pathname === base : pathname.startsWith(href);
@@ -27,7 +28,7 @@ export function WorkspaceNav({ slug }: { slug: string }) {
             href={href}
             aria-current={current ? "page" : undefined}
             className={cx(
-              "border-b-2 px-3 py-2 text-sm font-medium no-underline hover:no-underline",
+              "border-b-2 px-2.5 py-2 text-sm font-medium whitespace-nowrap no-underline hover:no-underline sm:px-3",
               current ? "border-accent-600 text-ink" : "border-transparent text-ink-muted hover:border-line-strong hover:text-ink",
             )}
           >

@@ -11,6 +11,11 @@ export function hasRole(actual: WorkspaceRole, minimum: WorkspaceRole): boolean 
   return rank[actual] >= rank[minimum];
 }
 
+/** The less privileged of two roles: what an API key may do is the lower of its own role and its user's. */
+export function lowerRole(a: WorkspaceRole, b: WorkspaceRole): WorkspaceRole {
+  return rank[a] <= rank[b] ? a : b;
+}
+
 /** Narrows a stored role string (better-auth keeps it as text) to one of ours. */
 export function isWorkspaceRole(value: string): value is WorkspaceRole {
   return (workspaceRoles as readonly string[]).includes(value);

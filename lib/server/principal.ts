@@ -1,4 +1,5 @@
 import { getUserById } from "@/db/queries/users";
+import type { WorkspaceRole } from "@/lib/auth/roles";
 import { auth } from "@/lib/auth/server";
 import { AppError } from "./errors";
 import { verifyApiKey } from "./api-keys";
@@ -6,9 +7,11 @@ import type { CurrentUser } from "./session";
 
 /**
  * Who is making a request: a browser session, or a script holding an API key. A key is bound to one
- * workspace (`onlyWorkspaceId`); it reaches nothing else.
+ * workspace (`onlyWorkspaceId`); it reaches nothing else, and there it acts at most as `keyRole`.
  */
-export type Principal = { user: CurrentUser; via: "session" } | { user: CurrentUser; via: "api-key"; onlyWorkspaceId: string };
+export type Principal =
+  | { user: CurrentUser; via: "session" }
+  | { user: CurrentUser; via: "api-key"; onlyWorkspaceId: string; keyRole: WorkspaceRole };
 
 const bearerPattern = /^Bearer\s+(\S+)$/i;
 
@@ -22,7 +25,7 @@ export async function resolvePrincipal(headers: Headers): Promise<Principal | nu
     if (!found) throw new AppError("unauthenticated", "The API key is not valid.");
     const user = await getUserById(found.userId);
     if (!user) throw new AppError("unauthenticated", "The API key is not valid.");
-    return { user, via: "api-key", onlyWorkspaceId: found.workspaceId };
+    return { user, via: "api-key", onlyWorkspaceId: found.workspaceId, keyRole: found.role };
   }
   const session = await auth.api.getSession({ headers });
   if (!session) return null;

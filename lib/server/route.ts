@@ -85,10 +85,11 @@ export function userRoute<S extends z.ZodType | undefined = undefined>(
 
 /**
  * Route handler under /api/workspaces/{slug}: adds the membership and minimum-role check
- * (non-member → 404, below the role → 403) before the body is even parsed.
+ * (non-member → 404, below the role → 403) before the body is even parsed. `sessionOnly` refuses API
+ * keys (403) after that check, for what only a person in the browser may do (managing keys).
  */
 export function workspaceRoute<S extends z.ZodType | undefined = undefined>(
-  options: InputOption<S> & { minimumRole: WorkspaceRole },
+  options: InputOption<S> & { minimumRole: WorkspaceRole; sessionOnly?: boolean },
   handler: (context: {
     access: WorkspaceAccess;
     input: ParsedInput<S>;
@@ -102,6 +103,9 @@ export function workspaceRoute<S extends z.ZodType | undefined = undefined>(
       const principal = await requirePrincipal(request.headers);
       const params = await context.params;
       const access = await authorizeWorkspace(principal, params.slug, options.minimumRole);
+      if (options.sessionOnly && principal.via !== "session") {
+        throw new AppError("forbidden", "API keys cannot be listed, created or revoked with an API key; use the browser.");
+      }
       requireSameOrigin(request, principal);
       const input = await parseBody(request, options.input as S);
       return toResponse(await handler({ access, input, request, params }));

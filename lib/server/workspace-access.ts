@@ -2,7 +2,7 @@ import "server-only";
 import { headers } from "next/headers";
 import { forbidden, notFound } from "next/navigation";
 import { getMembership, getWorkspaceBySlug, type WorkspaceSummary } from "@/db/queries/workspaces";
-import { hasRole, type WorkspaceRole } from "@/lib/auth/roles";
+import { hasRole, lowerRole, type WorkspaceRole } from "@/lib/auth/roles";
 import { workspaceSlugSchema } from "@/lib/schemas/workspaces";
 import { AppError } from "./errors";
 import { resolvePrincipal, type Principal } from "./principal";
@@ -13,7 +13,8 @@ export type WorkspaceAccess = { user: CurrentUser; workspace: WorkspaceSummary; 
 
 /**
  * The one authorisation rule. Non-members (and keys bound to another workspace) get not_found, so a
- * workspace's existence is never revealed; members below `minimumRole` get forbidden.
+ * workspace's existence is never revealed; members below `minimumRole` get forbidden. An API key acts
+ * with the lower of its own role and its user's current role.
  */
 export async function authorizeWorkspace(
   principal: Principal,
@@ -26,8 +27,9 @@ export async function authorizeWorkspace(
   if (principal.via === "api-key" && principal.onlyWorkspaceId !== workspace.id) throw new AppError("not_found");
   const membership = await getMembership({ workspaceId: workspace.id, userId: principal.user.id });
   if (!membership) throw new AppError("not_found");
-  if (!hasRole(membership.role, minimumRole)) throw new AppError("forbidden");
-  return { user: principal.user, workspace, role: membership.role, memberId: membership.memberId };
+  const role = principal.via === "api-key" ? lowerRole(principal.keyRole, membership.role) : membership.role;
+  if (!hasRole(role, minimumRole)) throw new AppError("forbidden");
+  return { user: principal.user, workspace, role, memberId: membership.memberId };
 }
 
 /**
