@@ -3,7 +3,9 @@
 import { useMemo } from "react";
 import { CartesianGrid, Legend, ResponsiveContainer, Scatter, ScatterChart, Tooltip, XAxis, YAxis } from "recharts";
 import { formatQuantity } from "@/components/format";
-import { bandColour } from "./palette";
+import { bandSortKey } from "@/lib/views/chart-tooltip";
+import { bandColour, bandMarker } from "@/lib/views/palette";
+import { BandTooltip } from "./band-tooltip";
 
 /** One plotted point: path distance in 1/Å, energy in eV. */
 export interface BandScatterPoint {
@@ -24,8 +26,9 @@ interface BandScatterChartProps {
 const tickKey = (x: number) => x.toFixed(6);
 
 /**
- * Energy (eV) against path distance (1/Å), one colour per band (Okabe & Ito 2008), labelled k-points as
- * x-axis ticks with vertical guide lines. Data are points, never lines (DESIGN.md "Look and feel").
+ * Energy (eV) against path distance (1/Å), one colour per band (Okabe & Ito 2008; a new marker after
+ * eight bands), labelled k-points as x-axis ticks with vertical guide lines. Data are points, never lines
+ * (DESIGN.md "Look and feel").
  */
 export function BandScatterChart({ points, ticks, description, height = 420 }: BandScatterChartProps) {
   const series = useMemo(() => {
@@ -46,6 +49,7 @@ export function BandScatterChart({ points, ticks, description, height = 420 }: B
     return labels;
   }, [ticks]);
   const tickValues = useMemo(() => [...new Set(ticks.map((t) => t.pathDistance))], [ticks]);
+  const labels = useMemo(() => new Map(series.map(([band]) => [`band-${band}`, `Band ${band}`])), [series]);
 
   return (
     <figure role="img" aria-label={description} className="w-full">
@@ -69,15 +73,10 @@ export function BandScatterChart({ points, ticks, description, height = 420 }: B
             label={{ value: "Energy (eV)", angle: -90, position: "insideLeft", offset: 4 }}
             tick={{ fontSize: 12 }}
           />
-          <Tooltip
-            cursor={false}
-            formatter={(value, name) =>
-              name === "energy" ? formatQuantity(Number(value), { unit: "eV", decimals: 4 }) : formatQuantity(Number(value), { unit: "1/Å", decimals: 4 })
-            }
-          />
-          <Legend verticalAlign="top" height={28} />
+          <Tooltip cursor={false} content={(props) => <BandTooltip active={props.active} payload={props.payload} labels={labels} xKey="pathDistance" />} />
+          <Legend verticalAlign="top" itemSorter={(item) => bandSortKey(String(item.value))} />
           {series.map(([band, list], i) => (
-            <Scatter key={band} name={`Band ${band}`} data={list} fill={bandColour(i)} shape="circle" isAnimationActive={false} r={2} />
+            <Scatter key={band} id={`band-${band}`} name={`Band ${band}`} data={list} fill={bandColour(i)} shape={bandMarker(i)} legendType={bandMarker(i)} isAnimationActive={false} />
           ))}
         </ScatterChart>
       </ResponsiveContainer>

@@ -1,15 +1,19 @@
 "use client";
 
-import { CartesianGrid, ComposedChart, Line, ReferenceArea, ResponsiveContainer, Scatter, Tooltip, XAxis, YAxis, ZAxis } from "recharts";
+import { CartesianGrid, ComposedChart, ErrorBar, Line, ReferenceArea, ResponsiveContainer, Scatter, Tooltip, XAxis, YAxis, ZAxis } from "recharts";
+import { BandTooltip } from "@/components/charts/band-tooltip";
+import { MarkerIcon } from "@/components/charts/marker-icon";
 import type { ChartPoint, PathTick } from "@/lib/views";
 import { niceStep } from "@/lib/views/band-series";
+import type { BandMarker } from "@/lib/views/palette";
 import { tickLabeller } from "@/lib/views/ticks";
 
-/** Data points of one band, drawn as dots. */
+/** Data points of one band, drawn as dots (with ±σ error bars where the points carry σ). */
 export interface PointSeries {
   key: string;
   label: string;
   colour: string;
+  marker: BandMarker;
   points: ChartPoint[];
 }
 
@@ -19,7 +23,8 @@ export interface LineSeries {
   label: string;
   colour: string;
   points: { x: number; y: number | null }[];
-  dashed?: boolean;
+  /** SVG stroke-dasharray; undefined draws a solid line */
+  dash?: string;
   /** thin lines for model bands no data band maps to */
   faint?: boolean;
 }
@@ -55,6 +60,8 @@ function energyTicks([low, high]: [number, number]): number[] {
  */
 export function BandChart({ points, lines, ticks, energyDomain, window, energyTitle = "E (eV)", description, height = 360 }: BandChartProps) {
   const tickPositions = ticks.map((t) => t.position);
+  const labels = new Map([...points, ...lines].map((s) => [s.key, s.label]));
+  const hasSigma = points.some((s) => s.points.some((p) => p.sigma !== undefined));
   const xDomain: [number, number] =
     tickPositions.length >= 2
       ? [tickPositions[0], tickPositions[tickPositions.length - 1]]
@@ -91,17 +98,18 @@ export function BandChart({ points, lines, ticks, energyDomain, window, energyTi
           />
           {/* symbol area in px²: small dots, so that model lines stay visible where they lie on the data */}
           <ZAxis range={[28, 28]} />
-          <Tooltip
-            isAnimationActive={false}
-            formatter={(value) => (typeof value === "number" ? `${value.toFixed(3).replace("-", "\u2212")}` : String(value))}
-            labelFormatter={() => ""}
-          />
+          <Tooltip isAnimationActive={false} content={(props) => <BandTooltip active={props.active} payload={props.payload} labels={labels} />} />
           {points.map((series) => (
-            <Scatter key={series.key} name={series.label} data={series.points} fill={series.colour} shape="circle" fillOpacity={0.7} isAnimationActive={false} />
+            <Scatter key={series.key} id={series.key} name={series.label} data={series.points} fill={series.colour} shape={series.marker} fillOpacity={0.7} isAnimationActive={false}>
+              {series.points.some((p) => p.sigma !== undefined) ? (
+                <ErrorBar dataKey="sigma" direction="y" width={0} stroke={series.colour} strokeWidth={1} isAnimationActive={false} />
+              ) : null}
+            </Scatter>
           ))}
           {lines.map((line) => (
             <Line
               key={line.key}
+              id={line.key}
               name={line.label}
               data={line.points}
               dataKey="y"
@@ -109,7 +117,7 @@ export function BandChart({ points, lines, ticks, energyDomain, window, energyTi
               stroke={line.colour}
               strokeWidth={line.faint ? 1 : 1.25}
               strokeOpacity={line.faint ? 0.6 : 1}
-              strokeDasharray={line.dashed ? "6 4" : undefined}
+              strokeDasharray={line.dash}
               dot={false}
               activeDot={false}
               connectNulls={false}
@@ -119,10 +127,10 @@ export function BandChart({ points, lines, ticks, energyDomain, window, energyTi
         </ComposedChart>
       </ResponsiveContainer>
       <figcaption className="mt-1 flex flex-wrap gap-x-4 gap-y-1 text-xs text-ink-muted">
-        <span>Dots: data. Lines: model (drawn over the dots).</span>
+        <span>Dots: data{hasSigma ? " with ±σ bars" : ""}. Lines: model (drawn over the dots).</span>
         {points.map((s) => (
           <span key={s.key} className="inline-flex items-center gap-1">
-            <span aria-hidden="true" className="inline-block size-2.5 rounded-full" style={{ backgroundColor: s.colour }} />
+            <MarkerIcon marker={s.marker} colour={s.colour} />
             {s.label}
           </span>
         ))}

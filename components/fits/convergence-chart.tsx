@@ -1,11 +1,11 @@
 "use client";
 
 import { CartesianGrid, Line, LineChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
-import { type TracePoint, convergenceSeries } from "@/lib/views/convergence";
+import { type TracePoint, convergenceSeries, formatLogTick, logAxisTicks } from "@/lib/views/convergence";
 
 const AXIS_FONT = { fontSize: 12, fill: "#4b5563" };
 
-/** χ² against iteration on a logarithmic axis (the best start's trace). */
+/** χ² against iteration on a logarithmic axis with ticks at 1, 2, 5 × 10ⁿ (the best start's trace). */
 export function ConvergenceChart({ trace }: { trace: TracePoint[] }) {
   const { points, domain } = convergenceSeries(trace);
   if (points.length === 0) return <p className="text-sm text-ink-muted">The fit recorded no iterations.</p>;
@@ -21,9 +21,11 @@ export function ConvergenceChart({ trace }: { trace: TracePoint[] }) {
             dataKey="chiSquared"
             scale="log"
             domain={domain}
+            ticks={logAxisTicks(domain)}
+            interval={0}
             allowDataOverflow
             tick={AXIS_FONT}
-            tickFormatter={(v: number) => v.toExponential(0)}
+            tickFormatter={formatLogTick}
             label={{ value: "χ² (log scale)", angle: -90, position: "insideLeft", ...AXIS_FONT }}
             width={64}
           />

@@ -1,7 +1,28 @@
 "use client";
 
 import { useState } from "react";
-import { correlationCells } from "@/lib/views/heatmap";
+import { correlationCells, correlationScaleStops } from "@/lib/views/heatmap";
+
+const scaleStops = correlationScaleStops();
+
+/** The colour scale of the heatmap: −1 to +1 with labelled ends and middle (decorative; the text says it). */
+function CorrelationScale() {
+  return (
+    <div className="flex flex-col gap-1 text-xs text-ink-muted">
+      <p>Colour scale: correlation coefficient</p>
+      <div
+        aria-hidden="true"
+        className="h-3 w-64 max-w-full rounded-sm border border-line"
+        style={{ background: `linear-gradient(to right, ${scaleStops.map((s) => s.fill).join(", ")})` }}
+      />
+      <div className="flex w-64 max-w-full justify-between tabular-nums">
+        <span>−1 anti-correlated</span>
+        <span>0</span>
+        <span>+1 correlated</span>
+      </div>
+    </div>
+  );
+}
 
 const format = (v: number | null) => (v === null ? "not determined" : v.toFixed(3).replace("-", "\u2212"));
 
@@ -23,7 +44,7 @@ export function CorrelationHeatmap({ names, matrix }: { names: string[]; matrix:
         <div className="inline-grid gap-px bg-line p-px" style={{ gridTemplateColumns: `auto repeat(${names.length}, 2.25rem)` }}>
           <div className="bg-surface" />
           {names.map((n) => (
-            <div key={`h-${n}`} className="flex h-24 items-end justify-center bg-surface pb-1 text-xs">
+            <div key={`h-${n}`} className="flex items-end justify-center bg-surface px-0.5 py-1 text-xs">
               <span className="[writing-mode:vertical-rl] rotate-180 whitespace-nowrap">{n}</span>
             </div>
           ))}
@@ -47,6 +68,7 @@ export function CorrelationHeatmap({ names, matrix }: { names: string[]; matrix:
           ))}
         </div>
       </div>
+      <CorrelationScale />
       <details className="text-sm">
         <summary className="cursor-pointer text-accent-700">Correlations as a table</summary>
         <div className="mt-2 overflow-x-auto">

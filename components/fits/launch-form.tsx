@@ -7,7 +7,7 @@ import { Button, Notice, Panel, SelectField, TextField } from "@/components/ui";
 import { DEFAULT_BAND_MAPPING, bandMappingSchema, fitOptionsSchema, modelSpecSchema, resolveModelSpec } from "@/lib/fit/bands/schema";
 import { IDENTITY_TRANSFORM } from "@/lib/views/band-series";
 import { TEMPLATE_IDS, type ModelDocument, type TemplateId, buildTemplate } from "@/lib/tb";
-import { dataBandColours } from "@/lib/views/band-colours";
+import { dataBandStyles } from "@/lib/views/band-colours";
 import { bandPairs } from "@/lib/views/band-mapping";
 import { type LaunchDraft, defaultLaunchOptions, parameterDrafts, readLaunchDraft } from "@/lib/views/launch-draft";
 import type { RevisionDetails } from "@/lib/views/responses";
@@ -137,7 +137,7 @@ export function LaunchForm({ slug, mode }: LaunchFormProps) {
     return sites.reduce((n, s) => n + s.orbitals.length, 0);
   }, [draft.source]);
   const pairs = bandPairs(previewMapping, bands, modelBandCount);
-  const colours = dataBandColours(bands);
+  const styles = dataBandStyles(bands);
   const window = reading.ok ? reading.request.window ?? null : null;
 
   const set = <K extends keyof LaunchDraft>(key: K, value: LaunchDraft[K]) => setDraft((d) => ({ ...d, [key]: value }));
@@ -258,7 +258,7 @@ export function LaunchForm({ slug, mode }: LaunchFormProps) {
                 <TextField name="mapping.firstModelBand" label="First model band" inputMode="numeric" value={draft.mapping.firstModelBand} onChange={(e) => set("mapping", { ...draft.mapping, firstModelBand: e.target.value })} errors={errorsFor("mapping.firstModelBand")} />
               </div>
             ) : null}
-            {bands.length ? <MappingPicture pairs={pairs} colours={colours} /> : null}
+            {bands.length ? <MappingPicture pairs={pairs} styles={styles} /> : null}
           </div>
         </Panel>
         <Panel title="Energy window, σ and weights">

@@ -1,12 +1,14 @@
+import { MarkerIcon } from "@/components/charts/marker-icon";
+import type { BandStyle } from "@/lib/views/band-colours";
 import type { BandPair } from "@/lib/views/band-mapping";
 
 /** A small picture of the band mapping: each data band with an arrow to its model band. */
-export function MappingPicture({ pairs, colours }: { pairs: BandPair[]; colours: ReadonlyMap<number, string> }) {
+export function MappingPicture({ pairs, styles }: { pairs: BandPair[]; styles: ReadonlyMap<number, BandStyle> }) {
   return (
     <ul aria-label="Which data band is compared with which model band" className="flex flex-col gap-1 text-sm tabular-nums">
       {pairs.map((p) => (
         <li key={p.dataBand} className="flex items-center gap-2">
-          <span aria-hidden="true" className="inline-block size-2.5 rounded-full" style={{ backgroundColor: colours.get(p.dataBand) }} />
+          {styles.get(p.dataBand) ? <MarkerIcon marker={styles.get(p.dataBand)!.marker} colour={styles.get(p.dataBand)!.colour} /> : null}
           <span className="w-24">data band {p.dataBand}</span>
           <span aria-hidden="true" className="text-ink-faint">→</span>
           {p.outOfRange ? (

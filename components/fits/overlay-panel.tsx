@@ -2,8 +2,10 @@
 
 import { useMemo, useState } from "react";
 import { CartesianGrid, ReferenceLine, ResponsiveContainer, Scatter, ScatterChart, Tooltip, XAxis, YAxis, ZAxis } from "recharts";
+import { BandTooltip } from "@/components/charts/band-tooltip";
+import { MarkerIcon } from "@/components/charts/marker-icon";
 import { Button, Input, Notice } from "@/components/ui";
-import { dataBandColours, modelBandColours } from "@/lib/views/band-colours";
+import { dataBandStyles, modelBandStyles } from "@/lib/views/band-colours";
 import { bandPairs } from "@/lib/views/band-mapping";
 import {
   type EnergyTransform,
@@ -61,9 +63,10 @@ export function OverlayPanel({
   const zoom = zoomMin.kind === "number" && zoomMax.kind === "number" && zoomMin.value < zoomMax.value ? { min: zoomMin.value, max: zoomMax.value } : undefined;
   const zoomError = zoomMin.kind === "invalid" || zoomMax.kind === "invalid" ? "enter numbers in eV" : zoomMin.kind === "number" && zoomMax.kind === "number" && !zoom ? "the lower end must be below the upper" : null;
 
-  const colours = useMemo(() => dataBandColours(bands), [bands]);
+  const styles = useMemo(() => dataBandStyles(bands), [bands]);
   const chartPoints = useMemo(
-    () => points.points.map((p) => ({ band: p.band, energy: p.energy, pathDistance: p.pathDistance, kIndex: p.kIndex, k: [p.kx, p.ky, p.kz] as [number, number, number] })),
+    () =>
+      points.points.map((p) => ({ band: p.band, energy: p.energy, sigma: p.sigma, pathDistance: p.pathDistance, kIndex: p.kIndex, k: [p.kx, p.ky, p.kz] as [number, number, number] })),
     [points],
   );
   const kPoints = useMemo(() => distinctKPoints(chartPoints), [chartPoints]);
@@ -80,13 +83,14 @@ export function OverlayPanel({
   );
   const modelBandCount = computed[0]?.lines.length ?? 0;
   const pairs = bandPairs(mapping, bands, modelBandCount);
-  const lineColours = modelBandColours(modelBandCount, pairs, colours);
+  const lineStyles = modelBandStyles(modelBandCount, pairs, styles);
   const shownModelBands = new Set(pairs.filter((p) => !hidden.has(p.dataBand) && p.modelBand !== null).map((p) => p.modelBand!));
 
   const dataSeries = dataSeriesByBand(chartPoints.filter((p) => !hidden.has(p.band))).map((s) => ({
     key: `data-${s.band}`,
     label: `data band ${s.band}`,
-    colour: colours.get(s.band)!,
+    colour: styles.get(s.band)!.colour,
+    marker: styles.get(s.band)!.marker,
     points: s.points,
   }));
   const lines: LineSeries[] = computed.flatMap((m) =>
@@ -96,9 +100,10 @@ export function OverlayPanel({
       .map((l) => ({
         key: `${m.key}-${l.band}`,
         label: `${m.label} band ${l.band}`,
-        colour: mapping.kind === "nearest" ? "#1c5264" : lineColours[l.band - 1],
+        colour: mapping.kind === "nearest" ? "#1c5264" : lineStyles[l.band - 1].colour,
         faint: mapping.kind !== "nearest" && !shownModelBands.has(l.band),
-        dashed: m.dashed,
+        // the compare page's second model is dashed throughout; otherwise the band's own dash
+        dash: m.dashed ? "6 4" : mapping.kind === "nearest" ? undefined : lineStyles[l.band - 1].dash,
         points: l.points,
       })),
   );
@@ -111,6 +116,8 @@ export function OverlayPanel({
     const modelBandOf = (b: number) => (mapping.kind === "nearest" ? ("nearest" as const) : (pairs.find((p) => p.dataBand === b)?.modelBand ?? null));
     return chartResiduals(chartPoints, energies, modelBandOf, window);
   }, [showResiduals, computed, mapping, pairs, chartPoints, window]);
+
+  const residualLabels = new Map(bands.map((b) => [`residual-${b}`, `band ${b}`]));
 
   const toggle = (band: number) => setHidden((h) => { const next = new Set(h); if (next.has(band)) next.delete(band); else next.add(band); return next; });
 
@@ -128,7 +135,7 @@ export function OverlayPanel({
           {bands.map((b) => (
             <label key={b} className="inline-flex items-center gap-1.5 text-sm">
               <input type="checkbox" checked={!hidden.has(b)} onChange={() => toggle(b)} className="accent-accent-700" />
-              <span aria-hidden="true" className="inline-block size-2.5 rounded-full" style={{ backgroundColor: colours.get(b) }} />
+              <MarkerIcon marker={styles.get(b)!.marker} colour={styles.get(b)!.colour} />
               band {b}
             </label>
           ))}
@@ -176,11 +183,19 @@ export function OverlayPanel({
                 <YAxis type="number" dataKey="y" tick={AXIS_FONT} width={56} tickFormatter={(v: number) => v.toFixed(2).replace("-", "\u2212")} label={{ value: "model − data (eV)", angle: -90, position: "insideLeft", ...AXIS_FONT }} />
                 <ReferenceLine y={0} stroke="#6b7280" />
                 <ZAxis range={[18, 18]} />
-                <Tooltip isAnimationActive={false} formatter={(v) => (typeof v === "number" ? v.toFixed(4) : String(v))} />
+                <Tooltip isAnimationActive={false} content={(props) => <BandTooltip active={props.active} payload={props.payload} labels={residualLabels} valueTitle="model − data" />} />
                 {bands
                   .filter((b) => !hidden.has(b))
                   .map((b) => (
-                    <Scatter key={b} name={`band ${b}`} data={residuals.filter((r) => r.band === b)} fill={colours.get(b)} isAnimationActive={false} />
+                    <Scatter
+                      key={b}
+                      id={`residual-${b}`}
+                      name={`band ${b}`}
+                      data={residuals.filter((r) => r.band === b)}
+                      fill={styles.get(b)!.colour}
+                      shape={styles.get(b)!.marker}
+                      isAnimationActive={false}
+                    />
                   ))}
               </ScatterChart>
             </ResponsiveContainer>

@@ -1,4 +1,4 @@
-import { bandColour } from "@/components/charts";
+import { bandColour } from "@/lib/views/palette";
 import { formatQuantity } from "@/components/format";
 
 // A decorative sketch for the landing page: nearest-neighbour square-lattice bands

@@ -196,7 +196,7 @@ export async function listDatasetPoints(params: {
  * A point as charts draw it: file-order `index`, k-point index and Cartesian k (1/Å, for model bands at the
  * data's own k-points), path distance (1/Å), band and energy (eV).
  */
-export type ChartPoint = Pick<StoredPoint, "index" | "kIndex" | "kx" | "ky" | "kz" | "pathDistance" | "band" | "energy">;
+export type ChartPoint = Pick<StoredPoint, "index" | "kIndex" | "kx" | "ky" | "kz" | "pathDistance" | "band" | "energy" | "sigma">;
 
 /**
  * The stride that keeps at most `maxPoints` points when every `stride`-th point of each band is kept
@@ -234,6 +234,7 @@ export async function sampleDatasetPoints(params: {
       pathDistance: datasetPoint.pathDistance,
       band: datasetPoint.band,
       energy: datasetPoint.energy,
+      sigma: datasetPoint.sigma,
       rank: sql<number>`row_number() over (partition by ${datasetPoint.band} order by ${datasetPoint.index}) - 1`.as("rank"),
     })
     .from(datasetPoint)
@@ -249,6 +250,7 @@ export async function sampleDatasetPoints(params: {
       pathDistance: ranked.pathDistance,
       band: ranked.band,
       energy: ranked.energy,
+      sigma: ranked.sigma,
     })
     .from(ranked)
     .where(stride === 1 ? undefined : sql`${ranked.rank} % ${stride} = 0`)

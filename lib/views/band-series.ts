@@ -1,9 +1,10 @@
 import { type ModelDocument, type Vec3, compileModel, computeBands } from "@/lib/tb";
 
-/** A data point on a band chart: path distance (1/Å) and energy (eV). */
+/** A data point on a band chart: path distance (1/Å), energy (eV) and, where the data give it, σ (eV). */
 export interface ChartPoint {
   x: number;
   y: number;
+  sigma?: number;
 }
 
 /** Data points of one data band, sorted along the path. */
@@ -19,17 +20,20 @@ export interface ChartDataPoint {
   band: number;
   /** eV */
   energy: number;
+  /** uncertainty of the energy, eV (photoemission peaks); null or absent when the data give none */
+  sigma?: number | null;
 }
 
 /**
- * Data points grouped by band (ascending), each band sorted by path distance.
+ * Data points grouped by band (ascending), each band sorted by path distance; a point keeps its σ (for
+ * error bars) when it has one.
  * @param points - dataset points, any order
  */
 export function dataSeriesByBand(points: readonly ChartDataPoint[]): DataBandSeries[] {
   const byBand = new Map<number, ChartPoint[]>();
   for (const p of points) {
     const list = byBand.get(p.band) ?? [];
-    list.push({ x: p.pathDistance, y: p.energy });
+    list.push(p.sigma === undefined || p.sigma === null ? { x: p.pathDistance, y: p.energy } : { x: p.pathDistance, y: p.energy, sigma: p.sigma });
     byBand.set(p.band, list);
   }
   return [...byBand.entries()]

@@ -54,3 +54,15 @@ export function correlationCells(names: readonly string[], matrix: readonly (rea
     })),
   );
 }
+
+/**
+ * Stops of the heatmap's colour scale from −1 to +1, evenly spaced, for its legend bar.
+ * @param count - number of stops, ≥ 2 (default 9: every 0.25)
+ */
+export function correlationScaleStops(count = 9): { value: number; fill: string }[] {
+  if (!Number.isInteger(count) || count < 2) throw new RangeError(`a colour scale needs at least 2 stops, got ${count}`);
+  return Array.from({ length: count }, (_, i) => {
+    const value = -1 + (2 * i) / (count - 1);
+    return { value, fill: correlationFill(value) };
+  });
+}

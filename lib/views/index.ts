@@ -1,5 +1,5 @@
 export { type PathTick, displayLabel, pathTicks, tickLabeller } from "./ticks";
-export { UNMAPPED_BAND_COLOUR, dataBandColours, modelBandColours } from "./band-colours";
+export { type BandStyle, UNMAPPED_BAND_COLOUR, dataBandStyles, modelBandStyles } from "./band-colours";
 export { type BandPair, bandPairs } from "./band-mapping";
 export {
   type ChartDataPoint,

@@ -138,6 +138,8 @@ export const datasetPointSchema = z.looseObject({
   pathDistance: z.number(),
   band: z.int(),
   energy: z.number(),
+  /** eV; null where the dataset gives no uncertainty */
+  sigma: z.number().nullish(),
 });
 export type DatasetPointRow = z.infer<typeof datasetPointSchema>;
 /** `GET …/datasets/{id}/chart-points`: every point, or every `stride`-th point of each band, of `total`. */

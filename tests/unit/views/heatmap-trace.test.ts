@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { convergenceSeries } from "@/lib/views/convergence";
+import { convergenceSeries, formatLogTick, logAxisTicks } from "@/lib/views/convergence";
 import { correlationCells, correlationFill } from "@/lib/views/heatmap";
 
 describe("correlation heatmap", () => {
@@ -36,5 +36,26 @@ describe("convergenceSeries", () => {
 
   it("gives one decade when all χ² are equal", () => {
     expect(convergenceSeries([{ iteration: 0, chiSquared: 10 }]).domain).toEqual([10, 100]);
+  });
+});
+
+describe("log-axis ticks", () => {
+  // Round steps 1, 2, 5 × 10ⁿ: common practice for readable axes (as for linear axes, niceStep).
+  it("puts ticks at 1, 2 and 5 × 10ⁿ inside a domain of up to three decades", () => {
+    expect(logAxisTicks([1, 1000])).toEqual([1, 2, 5, 10, 20, 50, 100, 200, 500, 1000]);
+    expect(logAxisTicks([1e-3, 1e-2])).toEqual([0.001, 0.002, 0.005, 0.01]);
+  });
+
+  it("keeps only the powers of ten over more decades", () => {
+    expect(logAxisTicks([1e-6, 1e2])).toEqual([1e-6, 1e-5, 1e-4, 1e-3, 1e-2, 0.1, 1, 10, 100]);
+  });
+
+  it("refuses a domain a log axis cannot show", () => {
+    expect(() => logAxisTicks([0, 10])).toThrow(/0 < low < high/);
+  });
+
+  it("writes ticks as decimals near 1 and as m×10ⁿ far from it", () => {
+    expect([0.01, 0.05, 1, 200, 1000].map(formatLogTick)).toEqual(["0.01", "0.05", "1", "200", "1000"]);
+    expect([2e-3, 5e-5, 1e-6, 1e4, 2e6].map(formatLogTick)).toEqual(["2×10⁻³", "5×10⁻⁵", "10⁻⁶", "10⁴", "2×10⁶"]);
   });
 });

@@ -1,1 +1,0 @@
-export { bandColour, okabeItoPalette } from "./palette";
