@@ -8,14 +8,14 @@ import "./globals.css";
 // Inter ships with the app (nothing is downloaded at build or run time). The Greek subset is a second
 // family in the font stack so that Γ, Δ, Σ and χ in k-path labels and fit statistics use the same face.
 const interLatin = localFont({
-  src: "./fonts/inter-latin-wght-normal.woff2",
+  src: "../public/fonts/inter-latin-wght-normal.woff2",
   variable: "--font-inter",
   weight: "100 900",
   display: "swap",
 });
 
 const interGreek = localFont({
-  src: "./fonts/inter-greek-wght-normal.woff2",
+  src: "../public/fonts/inter-greek-wght-normal.woff2",
   variable: "--font-inter-greek",
   weight: "100 900",
   display: "swap",

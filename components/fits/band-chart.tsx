@@ -4,7 +4,7 @@ import { CartesianGrid, ComposedChart, ErrorBar, Line, ReferenceArea, Responsive
 import { BandTooltip } from "@/components/charts/band-tooltip";
 import { MarkerIcon } from "@/components/charts/marker-icon";
 import type { ChartPoint, PathTick } from "@/lib/views";
-import { niceStep } from "@/lib/views/band-series";
+import { linearTicks } from "@/lib/views/band-series";
 import type { BandMarker } from "@/lib/views/palette";
 import { tickLabeller } from "@/lib/views/ticks";
 
@@ -46,13 +46,6 @@ interface BandChartProps {
 
 const AXIS_FONT = { fontSize: 12, fill: "#4b5563" };
 
-/** Ticks at round energies inside the domain, about six of them. */
-function energyTicks([low, high]: [number, number]): number[] {
-  const step = niceStep((high - low) / 6);
-  const ticks: number[] = [];
-  for (let e = Math.ceil(low / step) * step; e <= high + step * 1e-9; e += step) ticks.push(Number(e.toPrecision(12)));
-  return ticks;
-}
 
 /**
  * Energy against path distance: data as dots, model bands as lines, labelled high-symmetry ticks with
@@ -89,7 +82,7 @@ export function BandChart({ points, lines, ticks, energyDomain, window, energyTi
             type="number"
             dataKey="y"
             domain={energyDomain}
-            ticks={energyTicks(energyDomain)}
+            ticks={linearTicks(energyDomain)}
             allowDataOverflow
             tick={AXIS_FONT}
             tickFormatter={(v: number) => (Math.abs(v) < 1e-9 ? "0" : String(v).replace("-", "\u2212"))}

@@ -22,7 +22,9 @@ import type { ChartPoints, DatasetDetails } from "@/lib/views/responses";
 import { pathTicks } from "@/lib/views/ticks";
 import type { BandMapping, EnergyWindow } from "@/lib/fit/bands/schema";
 import type { ModelDocument } from "@/lib/tb";
+import type { ChartFigureSource } from "@/lib/views/figure";
 import { BandChart, type LineSeries } from "./band-chart";
+import { FigureDownloads } from "./figure-downloads";
 
 /** One model drawn over the data (the compare page draws two). */
 export interface OverlayModel {
@@ -46,6 +48,7 @@ export function OverlayPanel({
   mapping,
   window,
   showResiduals,
+  figure,
 }: {
   dataset: DatasetDetails;
   /** the chart-points route's answer: every point, or every `stride`-th point of each band */
@@ -54,6 +57,8 @@ export function OverlayPanel({
   mapping: BandMapping;
   window: EnergyWindow | null;
   showResiduals: boolean;
+  /** set on the revision page: offers the charts as figures for a paper */
+  figure?: { fitName: string; revision: number };
 }) {
   const bands = dataset.summary.bands;
   const [hidden, setHidden] = useState<Set<number>>(new Set());
@@ -82,7 +87,7 @@ export function OverlayPanel({
     [models, kPoints],
   );
   const modelBandCount = computed[0]?.lines.length ?? 0;
-  const pairs = bandPairs(mapping, bands, modelBandCount);
+  const pairs = useMemo(() => bandPairs(mapping, bands, modelBandCount), [mapping, bands, modelBandCount]);
   const lineStyles = modelBandStyles(modelBandCount, pairs, styles);
   const shownModelBands = new Set(pairs.filter((p) => !hidden.has(p.dataBand) && p.modelBand !== null).map((p) => p.modelBand!));
 
@@ -118,6 +123,22 @@ export function OverlayPanel({
   }, [showResiduals, computed, mapping, pairs, chartPoints, window]);
 
   const residualLabels = new Map(bands.map((b) => [`residual-${b}`, `band ${b}`]));
+
+  const figureSource: ChartFigureSource | null = figure
+    ? {
+        datasetName: dataset.name,
+        ticks,
+        xDomain: ticks.length >= 2 ? [ticks[0].position, ticks[ticks.length - 1].position] : [Math.min(...chartPoints.map((p) => p.pathDistance), 0), Math.max(...chartPoints.map((p) => p.pathDistance), 1)],
+        energyDomain: domain,
+        bands: dataSeries.map((s, i) => {
+          const band = Number(s.key.slice("data-".length));
+          return { band, index: bands.indexOf(band) >= 0 ? bands.indexOf(band) : i, colour: s.colour, points: s.points };
+        }),
+        lines: lines.map((l) => ({ colour: l.colour, dash: l.dash, points: l.points })),
+        models: models.map((m) => ({ label: m.label, dash: m.dashed ? "6 4" : undefined })),
+        residuals,
+      }
+    : null;
 
   const toggle = (band: number) => setHidden((h) => { const next = new Set(h); if (next.has(band)) next.delete(band); else next.add(band); return next; });
 
@@ -202,6 +223,7 @@ export function OverlayPanel({
           </figure>
         </div>
       ) : null}
+      {figure && figureSource ? <FigureDownloads source={figureSource} fitName={figure.fitName} revision={figure.revision} /> : null}
     </div>
   );
 }

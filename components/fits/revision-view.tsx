@@ -120,6 +120,7 @@ export function RevisionView({ slug, fitId, number, canEdit }: { slug: string; f
                   mapping={r.inputs.mapping}
                   window={r.inputs.window}
                   showResiduals
+                  figure={{ fitName: r.fitName, revision: number }}
                 />
               </>
             ) : (

@@ -110,6 +110,31 @@ export function niceStep(rough: number): number {
 }
 
 /**
+ * Ticks at round values (1, 2 or 5 × 10ⁿ apart, about six intervals) inside a domain.
+ * @param domain - [low, high], low < high
+ */
+export function linearTicks([low, high]: [number, number]): number[] {
+  const step = niceStep((high - low) / 6);
+  const ticks: number[] = [];
+  for (let v = Math.ceil(low / step) * step; v <= high + step * 1e-9; v += step) ticks.push(Number(v.toPrecision(12)));
+  return ticks;
+}
+
+/**
+ * A symmetric range (eV) around zero for the residual chart: the largest |residual| with 10 % room,
+ * rounded up to a round step; [−0.1, 0.1] when there are none.
+ * @param residuals - model − data, eV
+ */
+export function residualDomain(residuals: readonly { y: number }[]): [number, number] {
+  let largest = 0;
+  for (const r of residuals) largest = Math.max(largest, Math.abs(r.y));
+  if (!(largest > 0)) return [-0.1, 0.1];
+  const step = niceStep((largest * 1.1) / 3);
+  const edge = Math.ceil((largest * 1.1) / step) * step;
+  return [-edge, edge];
+}
+
+/**
  * Energy range (eV) to show: the given zoom window if any, else the data's range with 5 % padding,
  * widened to whole multiples of a round step (about six intervals) so the axis ticks read well.
  * @param zoom - the user's energy window, eV

@@ -63,3 +63,14 @@ export function bandDash(bandIndex: number): string | undefined {
   checkIndex(bandIndex);
   return bandDashes[Math.floor(bandIndex / bandPalette.length) % bandDashes.length];
 }
+
+/**
+ * Marker of a band's points in exported figures: a new shape for every band (cycling through five), so
+ * that bands stay apart in a greyscale print, where colours of similar lightness merge. With eight colours
+ * and five shapes no two of the first 40 bands look alike.
+ * @param bandIndex - zero-based band index (non-negative integer)
+ */
+export function figureBandMarker(bandIndex: number): BandMarker {
+  checkIndex(bandIndex);
+  return bandMarkers[bandIndex % bandMarkers.length];
+}

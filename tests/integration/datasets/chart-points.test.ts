@@ -4,7 +4,7 @@ import { type UploadTeam, createUploadTeam, upload } from "./helpers";
 // GET …/datasets/{id}/chart-points: the points a chart draws, in one request — every point up to `max`,
 // else every stride-th point of each band in file order with the same stride for all bands.
 
-type Point = { index: number; kIndex: number; kx: number; ky: number; kz: number; pathDistance: number; band: number; energy: number };
+type Point = { index: number; kIndex: number; kx: number; ky: number; kz: number; pathDistance: number; band: number; energy: number; sigma: number | null };
 type ChartPoints = { points: Point[]; total: number; stride: number };
 
 // Two bands of very different sizes: band 1 at 100 k-points, band 2 at every 15th of them (7 points),
@@ -65,8 +65,34 @@ describe("GET …/datasets/{id}/chart-points", () => {
     const body = await chart("");
     expect(body.stride).toBe(1);
     expect(body.total).toBe(107);
-    expect(body.points).toEqual(expectedSample(1).map((p) => ({ index: p.index, kIndex: p.kIndex, kx: p.kx, ky: p.ky, kz: p.kz, pathDistance: p.pathDistance, band: p.band, energy: p.energy })));
+    expect(body.points).toEqual(expectedSample(1).map((p) => ({ index: p.index, kIndex: p.kIndex, kx: p.kx, ky: p.ky, kz: p.kz, pathDistance: p.pathDistance, band: p.band, energy: p.energy, sigma: p.sigma })));
+    expect(body.points.every((p) => p.sigma === null)).toBe(true);
     expect((await chart("?max=107")).points).toHaveLength(107);
+  });
+
+  it("carries each point's σ in eV, for error bars (photoemission peaks)", async () => {
+    const peaks = ["kx,ky,branch,E (meV),dE (meV)", "0.10,0,1,-120,15", "0.20,0,1,-80,20", "0.30,0,1,-35,25"].join("\n") + "\n";
+    const uploaded = await upload(
+      team,
+      { name: "halvorsen-peaks.csv", bytes: peaks },
+      {
+        name: "Halvorsen peaks with σ",
+        source: "photoemission",
+        format: "long",
+        k: { kind: "cartesian", columns: ["kx", "ky"] },
+        band: { column: "branch" },
+        energy: { column: "E (meV)", unit: "meV" },
+        sigma: { column: "dE (meV)" },
+      },
+    );
+    expect(uploaded.status).toBe(201);
+    const response = await team.viewer.get(route("", (uploaded.body as { id: string }).id));
+    // σ in meV → eV: 15 meV = 0.015 eV (SI prefix milli = 10⁻³)
+    expect((response.body as ChartPoints).points.map((p) => [p.energy, p.sigma])).toEqual([
+      [expect.closeTo(-0.12, 12), expect.closeTo(0.015, 12)],
+      [expect.closeTo(-0.08, 12), expect.closeTo(0.02, 12)],
+      [expect.closeTo(-0.035, 12), expect.closeTo(0.025, 12)],
+    ]);
   });
 
   it("thins with one stride for all bands: every stride-th point of each band, at most max in all", async () => {
