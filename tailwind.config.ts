@@ -22,7 +22,7 @@ const config: Config = {
         ink: {
           DEFAULT: "#1b2329",
           muted: "#4d5a63",
-          faint: "#74818a",
+          faint: "#626e77",
         },
         surface: {
           DEFAULT: "#ffffff",
