@@ -40,7 +40,7 @@ export function CorrelationHeatmap({ names, matrix }: { names: string[]; matrix:
       <p className="h-5 text-sm tabular-nums" aria-live="polite">
         {activeCell ? `${activeCell.rowName} × ${activeCell.columnName}: ${format(activeCell.value)}` : "Point at a cell to read its correlation."}
       </p>
-      <div className="overflow-x-auto" aria-hidden="true">
+      <div className="relative overflow-x-auto" aria-hidden="true">
         <div className="inline-grid gap-px bg-line p-px" style={{ gridTemplateColumns: `auto repeat(${names.length}, 2.25rem)` }}>
           <div className="bg-surface" />
           {names.map((n) => (
@@ -71,7 +71,7 @@ export function CorrelationHeatmap({ names, matrix }: { names: string[]; matrix:
       <CorrelationScale />
       <details className="text-sm">
         <summary className="cursor-pointer text-accent-700">Correlations as a table</summary>
-        <div className="mt-2 overflow-x-auto">
+        <div className="relative mt-2 overflow-x-auto">
           <table className="border-collapse text-xs tabular-nums">
             <caption className="sr-only">Correlation matrix of the free parameters</caption>
             <thead>

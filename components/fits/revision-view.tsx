@@ -130,7 +130,7 @@ export function RevisionView({ slug, fitId, number, canEdit }: { slug: string; f
           <Panel title="Parameters" flush>
             <ParameterTable parameters={result.parameters} warnings={result.warnings} />
           </Panel>
-          <div className="grid gap-6 xl:grid-cols-[3fr_2fr]">
+          <div className="grid grid-cols-[minmax(0,1fr)] gap-6 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
             <Panel title="Residuals per band" flush>
               <BandTable bands={result.bands} />
             </Panel>

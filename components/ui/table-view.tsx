@@ -65,7 +65,9 @@ export function TableView<TFeatures extends TableViewFeatures, Row extends RowDa
 }: TableViewProps<TFeatures, Row>) {
   const rows = table.getRowModel().rows;
   return (
-    <div className="overflow-x-auto">
+    // relative: screen-reader-only text inside cells is absolutely positioned; without a positioned
+    // ancestor here it escapes the scroll box and widens the page on phones
+    <div className="relative overflow-x-auto">
       <table className={cx("w-full border-collapse text-sm", className)} aria-busy={busy}>
         <caption className={cx("px-4 py-2 text-left text-sm text-ink-muted", captionHidden && "sr-only")}>{caption}</caption>
         <thead className="bg-surface-sunken">

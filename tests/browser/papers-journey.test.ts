@@ -135,6 +135,7 @@ describe("scripts and papers in the browser", () => {
     expect((await curl(datasetsUrl, key)).status).toBe(401);
     await screenshot(page, "papers-02-api-key-revoked");
     await expectFitsPhone(page, "API keys page", "papers-03-api-keys-phone");
+    await expectNoSeriousAxeFindings(page, "API keys page at 390 px");
     await page.context().close();
   });
 
@@ -175,6 +176,7 @@ describe("scripts and papers in the browser", () => {
     await screenshot(page, "papers-05-revision");
     await expectNoSeriousAxeFindings(page, "revision page");
     await expectFitsPhone(page, "revision page", "papers-06-revision-phone");
+    await expectNoSeriousAxeFindings(page, "revision page at 390 px");
     await page.context().close();
   });
 
