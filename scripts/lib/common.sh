@@ -117,7 +117,9 @@ start_postgres() {
     log "PostgreSQL already running in $data (left running at the end)"
   else
     log "starting PostgreSQL on 127.0.0.1:$port"
-    as_postgres "$PG_BIN/pg_ctl" -D "$data" -l "$data/server.log" -w -o "-p $port -c listen_addresses=127.0.0.1 -k $data" start >/dev/null \
+    # 8>&- 9>&-: the server must not inherit our lock files' descriptors, or a server left behind by a
+    # killed run would hold the lock and refuse every later run.
+    as_postgres "$PG_BIN/pg_ctl" -D "$data" -l "$data/server.log" -w -o "-p $port -c listen_addresses=127.0.0.1 -k $data" start >/dev/null 8>&- 9>&- \
       || die "PostgreSQL did not start; see $data/server.log"
     PG_STARTED_HERE=1
   fi
