@@ -6,6 +6,7 @@ import { revisionTransform } from "@/lib/views/band-series";
 import { compareBands, compareParameters } from "@/lib/views/compare";
 import { useDatasetPoints, useRevision } from "./hooks";
 import { OverlayPanel } from "./overlay-panel";
+import { ParameterName } from "./parameter-name";
 
 const ev = (v: number | null | undefined, unit: string, error?: number | null) =>
   v === null || v === undefined ? "—" : formatQuantity(v, { unit: unit === "eV" ? "eV" : undefined, error: error ?? undefined, decimals: 4 });
@@ -47,7 +48,7 @@ export function CompareView({ slug, fitId, a, b }: { slug: string; fitId: string
               {parameters.map((row) => (
                 <tr key={row.name} className="border-b border-line last:border-b-0">
                   <th scope="row" className="px-4 py-2 text-left font-medium">
-                    {row.name}
+                    <ParameterName name={row.name} />
                     {row.a && row.b && row.a.free !== row.b.free ? <span className="ml-2 text-xs text-ink-muted">({row.b.free ? "freed in B" : "fixed in B"})</span> : null}
                   </th>
                   <td className="px-4 py-2 text-right tabular-nums whitespace-nowrap">{row.a ? ev(row.a.value, row.unit, row.a.standardError) : "absent"}</td>

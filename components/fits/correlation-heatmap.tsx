@@ -2,6 +2,7 @@
 
 import { useState } from "react";
 import { correlationCells, correlationScaleStops } from "@/lib/views/heatmap";
+import { parameterLabel } from "@/lib/views/parameter-label";
 
 const scaleStops = correlationScaleStops();
 
@@ -30,8 +31,9 @@ const format = (v: number | null) => (v === null ? "not determined" : v.toFixed(
  * Correlation of the free parameters as coloured cells (blue −1, white 0, vermillion +1); the value shows
  * on hover or focus, and the same numbers are in the table below for screen readers and copying.
  */
-export function CorrelationHeatmap({ names, matrix }: { names: string[]; matrix: (number | null)[][] }) {
+export function CorrelationHeatmap({ names: storedNames, matrix }: { names: string[]; matrix: (number | null)[][] }) {
   const [active, setActive] = useState<string | null>(null);
+  const names = storedNames.map(parameterLabel);
   if (names.length === 0) return <p className="text-sm text-ink-muted">No free parameters, so there is nothing to correlate.</p>;
   const cells = correlationCells(names, matrix);
   const activeCell = cells.find((c) => `${c.row}-${c.column}` === active);

@@ -2,6 +2,8 @@
 
 import { Input } from "@/components/ui";
 import type { ParameterDraft } from "@/lib/views/launch-draft";
+import { parameterLabel } from "@/lib/views/parameter-label";
+import { ParameterName } from "./parameter-name";
 
 type ErrorsFor = (field: string) => string[] | undefined;
 
@@ -49,27 +51,28 @@ export function ParameterEditor({ rows, onChange, errorsFor }: { rows: Parameter
           {rows.map((row, i) => {
             const key = `parameters.${row.name}`;
             const safeId = `param-${i}`;
+            const label = parameterLabel(row.name);
             return (
               <tr key={row.name} className="border-b border-line align-top last:border-b-0">
                 <th scope="row" className="px-3 py-1.5 text-left font-medium">
-                  {row.name}
+                  <ParameterName name={row.name} />
                   {row.description ? <span className="block text-xs font-normal text-ink-muted">{row.description}</span> : null}
                 </th>
                 <td className="px-3 py-1.5">
-                  <Cell id={`${safeId}-value`} label={`${row.name} start value`} value={row.value} onChange={(value) => update(i, { value })} errors={errorsFor(`${key}.value`)} />
+                  <Cell id={`${safeId}-value`} label={`${label} start value`} value={row.value} onChange={(value) => update(i, { value })} errors={errorsFor(`${key}.value`)} />
                 </td>
                 <td className="px-3 py-1.5 text-ink-muted">{row.unit === "eV" ? "eV" : "1"}</td>
                 <td className="px-3 py-1.5">
                   <label className="inline-flex items-center gap-1.5">
-                    <input type="checkbox" className="accent-accent-700" checked={row.free} onChange={(e) => update(i, { free: e.target.checked })} aria-label={`fit ${row.name}`} />
+                    <input type="checkbox" className="accent-accent-700" checked={row.free} onChange={(e) => update(i, { free: e.target.checked })} aria-label={`fit ${label}`} />
                     {row.free ? "free" : "fixed"}
                   </label>
                 </td>
                 <td className="px-3 py-1.5">
-                  <Cell id={`${safeId}-min`} label={`${row.name} lower bound`} value={row.min} onChange={(min) => update(i, { min })} errors={errorsFor(`${key}.min`)} />
+                  <Cell id={`${safeId}-min`} label={`${label} lower bound`} value={row.min} onChange={(min) => update(i, { min })} errors={errorsFor(`${key}.min`)} />
                 </td>
                 <td className="px-3 py-1.5">
-                  <Cell id={`${safeId}-max`} label={`${row.name} upper bound`} value={row.max} onChange={(max) => update(i, { max })} errors={errorsFor(`${key}.max`)} />
+                  <Cell id={`${safeId}-max`} label={`${label} upper bound`} value={row.max} onChange={(max) => update(i, { max })} errors={errorsFor(`${key}.max`)} />
                 </td>
               </tr>
             );

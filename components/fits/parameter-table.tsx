@@ -3,13 +3,14 @@
 import { Badge, DataTable, Notice, dataColumnHelper } from "@/components/ui";
 import { formatQuantity } from "@/components/format";
 import type { BandFitParameter, BandFitWarning } from "@/lib/fit/bands/schema";
+import { ParameterName } from "./parameter-name";
 
 const column = dataColumnHelper<BandFitParameter>();
 const unitOf = (p: BandFitParameter) => (p.unit === "eV" ? "eV" : undefined);
 const bound = (value: number | undefined, p: BandFitParameter) => (value === undefined ? "—" : formatQuantity(value, { unit: unitOf(p) }));
 
 const columns = column.columns([
-  column.accessor("name", { header: "Parameter", cell: (c) => <span className="font-medium">{c.getValue()}</span> }),
+  column.accessor("name", { header: "Parameter", cell: (c) => <ParameterName name={c.getValue()} /> }),
   column.accessor("value", {
     header: "Fitted value",
     meta: { numeric: true },

@@ -17,11 +17,20 @@ export {
   type ModelDocumentInput,
   type ModelParameter,
   type ModelSite,
+  bondIntegralKeySchema,
   modelDocumentSchema,
   modelParameterSchema,
 } from "./model/schema";
 export { type ModelIssue, ModelError } from "./model/errors";
-export { bondIntegralName, onsiteParameterName } from "./model/parameter-names";
+export {
+  type BondIntegralKey,
+  SPECIES_SEPARATOR,
+  bondIntegralName,
+  bondIntegralOf,
+  canonicalParameterName,
+  onsiteOf,
+  onsiteParameterName,
+} from "./model/parameter-names";
 export {
   type BondIntegralOrigin,
   type CompiledModel,
@@ -30,7 +39,15 @@ export {
   type ModelTerm,
   compileModel,
 } from "./model/compile";
-export { BOND_TYPES, type BondType } from "./slater-koster/bond-types";
+export {
+  BOND_KINDS,
+  BOND_TYPES,
+  type BondKind,
+  type BondType,
+  SHELL_PAIRS,
+  type ShellPair,
+  splitBondType,
+} from "./slater-koster/bond-types";
 export { type BondIntegralValues, slaterKosterElement } from "./slater-koster/table";
 export {
   HARRISON_ETA,

@@ -38,6 +38,7 @@ export {
   residualSortColumns,
   sortFromTable,
 } from "./residual-query";
+export { parameterLabel } from "./parameter-label";
 export { FieldErrors, type NumberReading, readNumber } from "./number-field";
 export {
   type DraftReading,

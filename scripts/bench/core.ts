@@ -6,11 +6,13 @@ import {
   type OrbitalShell,
   type Vec3,
   bandsWithGradients,
+  bondIntegralName,
   buildTemplate,
   compileModel,
   computeBands,
   orbitalShell,
   prepareHamiltonian,
+  splitBondType,
   templateKPath,
 } from "../../lib/tb";
 
@@ -30,14 +32,14 @@ function median(repeat: number, work: () => void): number {
 function diamondWith(orbitals: ModelDocument["sites"][number]["orbitals"]): ModelDocument {
   const base = buildTemplate("diamond-sp3s-star");
   const shells = new Set(orbitals.map(orbitalShell));
-  // bond types whose two shell letters (e.g. "pd" in "pd_pi") are both present; no s* here
-  const bonds = BOND_TYPES.filter((b) => !b.includes("*") && [...b.split("_")[0]].every((s) => shells.has(s as OrbitalShell)));
+  // bond types whose two shells (e.g. "pd" in "pdπ") are both present; no s* here
+  const bonds = BOND_TYPES.filter((b) => !b.includes("*") && [...splitBondType(b).bond].every((s) => shells.has(s as OrbitalShell)));
   return {
     ...base,
     sites: base.sites.map((s) => ({ ...s, orbitals })),
     parameters: [
       ...[...shells].map((s, i) => ({ name: `E_${s}[Si]`, value: -4 + 3 * i, unit: "eV" as const, free: true })),
-      ...bonds.map((b, i) => ({ name: `V_${b}[Si-Si,1]`, value: (i % 2 ? 1 : -1) * (1 + 0.1 * i), unit: "eV" as const, free: true })),
+      ...bonds.map((b, i) => ({ name: bondIntegralName({ matrix: "hamiltonian", ...splitBondType(b), pair: ["Si", "Si"], shell: 1 }), value: (i % 2 ? 1 : -1) * (1 + 0.1 * i), unit: "eV" as const, free: true })),
     ],
   };
 }

@@ -32,3 +32,4 @@ export {
 export { BandFitError, runBandFit } from "./run";
 export { type BandFitValidation, type PreparedBandFit, validateBandFit } from "./validate";
 export { ENERGY_OFFSET, RENORMALISATION } from "./problem";
+export { type StoredResult, readStoredResult } from "./stored-result";

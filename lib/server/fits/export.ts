@@ -1,10 +1,10 @@
 import "server-only";
 import type { RevisionDetails } from "@/db/queries/fits";
-import { ENERGY_OFFSET, RENORMALISATION } from "@/lib/fit/bands";
+import { ENERGY_OFFSET, RENORMALISATION, type StoredResult } from "@/lib/fit/bands";
 import { type EnergyAlignment, type ParameterSet, buildParameterSet } from "@/lib/export";
 import packageJson from "@/package.json";
 import type { RevisionSnapshot } from "./snapshot";
-import { type StoredResult, requireResult, snapshotOf } from "./views";
+import { requireResult, snapshotOf } from "./views";
 
 /** The energy alignment a fit used: its fitted (or fixed) δ and Z and the reference E_ref, eV. */
 export function alignmentOf(result: StoredResult, snapshot: RevisionSnapshot): EnergyAlignment {

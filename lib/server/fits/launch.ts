@@ -3,18 +3,18 @@ import { getDatasetForFit, loadDatasetPoints } from "@/db/queries/fit-data";
 import { type SendRevisionJob, createFitWithFirstRevision, createNextRevision } from "@/db/queries/fits";
 import {
   type BandFitIssue,
-  type BandFitResult,
   DEFAULT_BAND_MAPPING,
   type BandMapping,
   type EnergyWindow,
   type FitOptions,
   type ModelSpec,
+  type StoredResult,
   fitOptionsSchema,
   resolveModelSpec,
   validateBandFit,
 } from "@/lib/fit/bands";
 import { env } from "@/lib/env";
-import { type ModelDocument, ModelError } from "@/lib/tb";
+import { type ModelDocument, ModelError, canonicalParameterName } from "@/lib/tb";
 import { AppError } from "../errors";
 import { getQueue } from "../job-queue";
 import { sendFitJob } from "../queues";
@@ -112,23 +112,24 @@ export async function launchFit(params: { workspaceId: string; userId: string; i
   return { fitId: created.fitId, revision: created.number, warnings };
 }
 
-/** Copies a parameter list's values from a fitted one (same names) and applies per-name edits. */
+/** Applies per-name edits to a model's parameters (names in either spelling, `V_ppπ[Si–Si,1]` or `V_pp_pi[Si-Si,1]`). */
 function withParameters(model: ModelDocument, changes: NewRevisionInput["parameters"]): ModelDocument {
   const known = new Set(model.parameters.map((p) => p.name));
-  const unknown = Object.keys(changes ?? {}).filter((name) => !known.has(name));
+  const byName = new Map(Object.entries(changes ?? {}).map(([name, change]) => [canonicalParameterName(name), { name, change }]));
+  const unknown = [...byName].filter(([canonical]) => !known.has(canonical)).map(([, { name }]) => name);
   if (unknown.length)
     refuse(unknown.map((name) => ({ path: `parameters.${name}`, message: `the model has no parameter "${name}"` })));
   return {
     ...model,
     parameters: model.parameters.map((p) => {
-      const change = changes?.[p.name];
+      const change = byName.get(p.name)?.change;
       return change ? { ...p, ...Object.fromEntries(Object.entries(change).filter(([, v]) => v !== undefined)) } : p;
     }),
   };
 }
 
 /** The parent's options with its fitted offset and renormalisation as start values, then the changes. */
-function nextOptions(parent: RevisionSnapshot, result: BandFitResult | null, changes: Record<string, unknown> | undefined): FitOptions {
+function nextOptions(parent: RevisionSnapshot, result: StoredResult | null, changes: Record<string, unknown> | undefined): FitOptions {
   const fitted = (name: string) => result?.parameters.find((p) => p.name === name)?.value;
   const offset = fitted("energy offset");
   const scale = fitted("renormalisation");
@@ -154,12 +155,13 @@ export async function launchRevision(params: {
   userId: string;
   fitId: string;
   datasetId: string;
-  parent: { inputs: unknown; result: unknown };
+  /** the parent's stored inputs, and its result in today's names (`resultOf`) */
+  parent: { inputs: unknown; result: StoredResult | null };
   input: NewRevisionInput;
 }) {
   const { input } = params;
   const parentSnapshot = revisionSnapshotSchema.parse(params.parent.inputs);
-  const parentResult = (params.parent.result ?? null) as BandFitResult | null;
+  const parentResult = params.parent.result;
   const baseModel = input.model ? resolveModel(input.model) : (parentResult?.fittedModel ?? parentSnapshot.model);
   const startModel = withParameters(baseModel, input.parameters);
   const window = input.window === null ? undefined : (input.window ?? parentSnapshot.window ?? undefined);

@@ -1,11 +1,8 @@
 import "server-only";
 import { type RevisionDetails, getFit, getRevision } from "@/db/queries/fits";
-import type { BandFitResult } from "@/lib/fit/bands";
+import { type StoredResult, readStoredResult } from "@/lib/fit/bands";
 import { AppError } from "../errors";
 import { type RevisionSnapshot, revisionSnapshotSchema } from "./snapshot";
-
-/** A stored result: the band fit result without its per-point residuals (those are rows). */
-export type StoredResult = Omit<BandFitResult, "residuals">;
 
 /** Revision numbers are stored as PostgreSQL `integer` (int4): 2³¹ − 1 at most (PostgreSQL 15 manual §8.1.1). */
 const maxRevisionNumber = 2_147_483_647;
@@ -46,9 +43,15 @@ export function snapshotOf(details: RevisionDetails): RevisionSnapshot {
   return revisionSnapshotSchema.parse(details.revision.inputs);
 }
 
+/** The revision's stored result in today's parameter names, or null while it has none. */
+export function resultOf(details: Pick<RevisionDetails, "revision">): StoredResult | null {
+  const result = details.revision.result as StoredResult | null;
+  return result ? readStoredResult(result) : null;
+}
+
 /** The revision's stored result or 409 when it has none (still queued or running, or failed). */
 export function requireResult(details: RevisionDetails): StoredResult {
-  const result = details.revision.result as StoredResult | null;
+  const result = resultOf(details);
   if (!result) throw new AppError("conflict", `Revision ${details.revision.number} has no result yet (status: ${details.revision.status}).`);
   return result;
 }
@@ -73,7 +76,7 @@ export function revisionView(details: RevisionDetails) {
     startedAt: revision.startedAt,
     finishedAt: revision.finishedAt,
     launchWarnings: revision.launchWarnings,
-    inputs: revision.inputs,
-    result: revision.result,
+    inputs: snapshotOf(details),
+    result: resultOf(details),
   };
 }

@@ -2,11 +2,11 @@ import type { z } from "zod";
 import { completeLattice, reciprocalLattice } from "../geometry/lattice";
 import { type Translation, coincidentSites, findNeighbourShells } from "../geometry/shells";
 import { type Vec3, add, combine, scale } from "../geometry/vec3";
-import { type BondType, bondTypesBetween } from "../slater-koster/bond-types";
+import { type BondType, bondTypesBetween, splitBondType } from "../slater-koster/bond-types";
 import { slaterKosterElement } from "../slater-koster/table";
 import { type ModelIssue, ModelError } from "./errors";
 import { SHELL_ORDER, type OrbitalName, orbitalShell } from "./orbitals";
-import { bondIntegralName, onsiteParameterName } from "./parameter-names";
+import { type BondIntegralKey, type ModelMatrix, bondIntegralName, onsiteParameterName } from "./parameter-names";
 import { type HoppingEntry, type ModelDocument, type ModelParameter, modelDocumentSchema } from "./schema";
 
 /** One orbital of the basis, in basis order (sites in document order, orbitals in site order). */
@@ -22,8 +22,7 @@ export interface CompiledOrbital {
   readonly position: Vec3;
 }
 
-/** Which matrix a term or parameter belongs to. */
-export type ModelMatrix = "hamiltonian" | "overlap";
+export type { ModelMatrix } from "./parameter-names";
 
 /**
  * One linear term of H(k) or S(k): M_from,to(k) += θ_parameter × (re + i·im) × e^{ik·bond}. Every term's
@@ -41,14 +40,12 @@ export interface ModelTerm {
   readonly im: number;
 }
 
-/** Where a generated Slater–Koster parameter comes from (for starting-value helpers and display). */
+/** Where a generated Slater–Koster parameter comes from (for starting-value helpers, display and export). */
 export interface BondIntegralOrigin {
   readonly parameter: string;
-  readonly matrix: ModelMatrix;
-  readonly bond: BondType;
-  /** [species of the lower shell, species of the upper shell] (alphabetical for same-shell integrals) */
-  readonly species: [string, string];
-  readonly shell: number;
+  /** the parameter's name as structured fields (matrix, shell pair, kind, species pair, shell) */
+  readonly integral: BondIntegralKey;
+  readonly type: BondType;
   /** bond length, Å */
   readonly distance: number;
 }
@@ -278,9 +275,9 @@ function addSlaterKosterTerms(doc: ModelDocument, orbitals: CompiledOrbital[], p
           const coefficient = slaterKosterElement(a.orbital, b.orbital, direction, (t) => (t === type ? 1 : 0));
           if (Math.abs(coefficient) < COEFFICIENT_CUTOFF) continue;
           for (const matrix of matrices) {
-            const name = bondIntegralName(matrix, type, species[0], species[1], bond.shell);
-            if (!origins.has(name))
-              origins.set(name, { parameter: name, matrix, bond: type, species, shell: bond.shell, distance: bond.distance });
+            const integral: BondIntegralKey = { matrix, ...splitBondType(type), pair: species, shell: bond.shell };
+            const name = bondIntegralName(integral);
+            if (!origins.has(name)) origins.set(name, { parameter: name, integral, type, distance: bond.distance });
             pending.push({
               matrix,
               from: a.index,

@@ -1,5 +1,7 @@
 import { z } from "zod";
+import { BOND_KINDS, SHELL_PAIRS } from "../slater-koster/bond-types";
 import { ORBITAL_NAMES } from "./orbitals";
+import { type BondIntegralKey, bondIntegralName, bondIntegralOf, canonicalParameterName } from "./parameter-names";
 
 const vec3 = z.tuple([z.number().finite(), z.number().finite(), z.number().finite()]);
 const integer = z.number().int();
@@ -13,19 +15,61 @@ const factorSchema = z.union([z.number().finite(), z.tuple([z.number().finite(),
 /** Units of a parameter: eV for energies (on-site, hopping, bond integral), "1" for dimensionless overlaps. */
 export const parameterUnitSchema = z.enum(["eV", "1"]);
 
-export const modelParameterSchema = z.object({
-  name: z.string().min(1),
-  value: z.number().finite(),
-  unit: parameterUnitSchema,
-  free: z.boolean(),
-  min: z.number().finite().optional(),
-  max: z.number().finite().optional(),
-  description: z.string().optional(),
-});
+/** A parameter name as read: bond integrals in the earlier spelling (`V_pp_pi[Si-Si,1]`) become today's (`V_ppπ[Si–Si,1]`). */
+const parameterNameSchema = z.string().min(1).transform(canonicalParameterName);
+
+const speciesSchema = z.string().regex(/^[A-Za-z][A-Za-z0-9_]*$/, "a species is a chemical symbol or a plain name");
+
+/** A bond integral's name as structured fields: `V_ppπ[Si–Si,1]` is { hamiltonian, pp, π, [Si, Si], 1 }. */
+export const bondIntegralKeySchema = z
+  .object({
+    matrix: z.enum(["hamiltonian", "overlap"]),
+    /** shell pair, lower shell first */
+    bond: z.enum(SHELL_PAIRS),
+    /** angular momentum about the bond */
+    kind: z.enum(BOND_KINDS),
+    /** [species of the lower shell, species of the upper shell] (alphabetical for same-shell integrals) */
+    pair: z.tuple([speciesSchema, speciesSchema]),
+    /** neighbour shell, from 1 */
+    shell: z.int().min(1),
+  })
+  .strict();
+
+const sameKey = (a: BondIntegralKey, b: BondIntegralKey) => bondIntegralName(a) === bondIntegralName(b);
+
+/**
+ * A parameter. A bond integral's `integral` is filled in from its name; one given must match the name
+ * (the name is what terms refer to, the key is the same thing as fields).
+ */
+export const modelParameterSchema = z
+  .object({
+    name: parameterNameSchema,
+    value: z.number().finite(),
+    unit: parameterUnitSchema,
+    free: z.boolean(),
+    min: z.number().finite().optional(),
+    max: z.number().finite().optional(),
+    description: z.string().optional(),
+    integral: bondIntegralKeySchema.optional(),
+  })
+  .superRefine((p, ctx) => {
+    if (!p.integral) return;
+    const named = bondIntegralOf(p.name);
+    if (!named || !sameKey(named, p.integral))
+      ctx.addIssue({
+        code: "custom",
+        path: ["integral"],
+        message: `the integral ${bondIntegralName(p.integral)} does not match the parameter's name "${p.name}"`,
+      });
+  })
+  .transform((p) => {
+    const integral = p.integral ?? bondIntegralOf(p.name);
+    return integral ? { ...p, integral } : p;
+  });
 
 export const modelSiteSchema = z.object({
   label: z.string().regex(/^[^:\s]+$/, "a site label has no spaces or colons"),
-  species: z.string().regex(/^[A-Za-z][A-Za-z0-9_]*$/, "a species is a chemical symbol or a plain name"),
+  species: speciesSchema,
   /** fractional coordinates of the lattice vectors (for 1D/2D the extra components are Å along the completed axes) */
   position: vec3,
   orbitals: z.array(z.enum(ORBITAL_NAMES)).min(1),
@@ -34,7 +78,7 @@ export const modelSiteSchema = z.object({
 /** Overrides the default on-site parameter of one orbital; `parameter: null` means zero on-site energy. */
 export const onsiteEntrySchema = z.object({
   orbital: orbitalReference,
-  parameter: z.string().min(1).nullable(),
+  parameter: parameterNameSchema.nullable(),
 });
 
 /** Slater–Koster hoppings between all site pairs up to a neighbour shell, with bond integrals as parameters. */
@@ -53,7 +97,7 @@ export const hoppingEntrySchema = z.object({
   to: orbitalReference,
   /** lattice translation R of the `to` orbital, integer multiples of a1, a2, a3 */
   translation: z.tuple([integer, integer, integer]),
-  parameter: z.string().min(1),
+  parameter: parameterNameSchema,
   factor: factorSchema.default(1),
 });
 

@@ -1,53 +1,37 @@
 import type { OrbitalShell } from "../model/orbitals";
 
 /**
- * Slater–Koster bond integrals (Slater & Koster, Phys. Rev. 94, 1498 (1954)), in ASCII form: shells in
- * ascending order (s, s*, p, d) followed by the angular-momentum component along the bond.
- * "ss*_sigma" couples s on the first atom with s* on the second.
+ * Slater–Koster two-centre bond integrals (Slater & Koster, Phys. Rev. 94, 1498 (1954)), in our own
+ * structure: the pair of shells they couple, lower shell first (s < s* < p < d), and the component of
+ * angular momentum about the bond, σ (0), π (1) or δ (2). "ss*" couples s on the first atom with s* on
+ * the second.
  */
-export const BOND_TYPES = [
-  "ss_sigma",
-  "ss*_sigma",
-  "s*s*_sigma",
-  "sp_sigma",
-  "s*p_sigma",
-  "sd_sigma",
-  "s*d_sigma",
-  "pp_sigma",
-  "pp_pi",
-  "pd_sigma",
-  "pd_pi",
-  "dd_sigma",
-  "dd_pi",
-  "dd_delta",
-] as const;
+export const SHELL_PAIRS = ["ss", "ss*", "s*s*", "sp", "s*p", "sd", "s*d", "pp", "pd", "dd"] as const;
+export type ShellPair = (typeof SHELL_PAIRS)[number];
+
+/** Angular momentum about the bond axis: σ (m = 0), π (|m| = 1), δ (|m| = 2). */
+export const BOND_KINDS = ["σ", "π", "δ"] as const;
+export type BondKind = (typeof BOND_KINDS)[number];
+
+/** Every bond integral, written shell pair then kind: "ssσ", "ppπ", "ddδ". */
+export const BOND_TYPES = ["ssσ", "ss*σ", "s*s*σ", "spσ", "s*pσ", "sdσ", "s*dσ", "ppσ", "ppπ", "pdσ", "pdπ", "ddσ", "ddπ", "ddδ"] as const;
 export type BondType = (typeof BOND_TYPES)[number];
+
+/** The shell pair and kind of a bond integral: "ppπ" → { bond: "pp", kind: "π" }. */
+export function splitBondType(type: BondType): { bond: ShellPair; kind: BondKind } {
+  return { bond: type.slice(0, -1) as ShellPair, kind: type.slice(-1) as BondKind };
+}
+
+/** The bond integral of a shell pair and kind, or null when the pair has no such integral (ssπ). */
+export function bondTypeOf(bond: ShellPair, kind: BondKind): BondType | null {
+  const type = `${bond}${kind}`;
+  return (BOND_TYPES as readonly string[]).includes(type) ? (type as BondType) : null;
+}
 
 /** The bond integrals that couple two shells (given in ascending order). */
 export function bondTypesBetween(first: OrbitalShell, second: OrbitalShell): BondType[] {
   const pair = `${first}${second}`;
-  switch (pair) {
-    case "ss":
-      return ["ss_sigma"];
-    case "ss*":
-      return ["ss*_sigma"];
-    case "s*s*":
-      return ["s*s*_sigma"];
-    case "sp":
-      return ["sp_sigma"];
-    case "s*p":
-      return ["s*p_sigma"];
-    case "sd":
-      return ["sd_sigma"];
-    case "s*d":
-      return ["s*d_sigma"];
-    case "pp":
-      return ["pp_sigma", "pp_pi"];
-    case "pd":
-      return ["pd_sigma", "pd_pi"];
-    case "dd":
-      return ["dd_sigma", "dd_pi", "dd_delta"];
-    default:
-      throw new Error(`shells ${first} and ${second} are not in ascending order`);
-  }
+  const types = BOND_TYPES.filter((t) => splitBondType(t).bond === pair);
+  if (types.length === 0) throw new Error(`shells ${first} and ${second} are not in ascending order`);
+  return types;
 }

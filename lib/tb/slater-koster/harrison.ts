@@ -10,7 +10,7 @@ export const HBAR2_OVER_M = 7.62;
  * Structure and the Properties of Solids* (1980), Solid State Table (the 1980 set; later papers use
  * another set which must not be mixed in).
  */
-export const HARRISON_ETA = { ss_sigma: -1.4, sp_sigma: 1.84, pp_sigma: 3.24, pp_pi: -0.81 } as const;
+export const HARRISON_ETA = { "ssσ": -1.4, "spσ": 1.84, "ppσ": 3.24, "ppπ": -0.81 } as const;
 
 export type HarrisonBondType = keyof typeof HARRISON_ETA;
 
@@ -23,10 +23,10 @@ export function harrisonBondIntegrals(distance: number): Record<HarrisonBondType
   if (!(distance > 0)) throw new RangeError("bond length must be positive (Å)");
   const scale = HBAR2_OVER_M / (distance * distance);
   return {
-    ss_sigma: HARRISON_ETA.ss_sigma * scale,
-    sp_sigma: HARRISON_ETA.sp_sigma * scale,
-    pp_sigma: HARRISON_ETA.pp_sigma * scale,
-    pp_pi: HARRISON_ETA.pp_pi * scale,
+    "ssσ": HARRISON_ETA["ssσ"] * scale,
+    "spσ": HARRISON_ETA["spσ"] * scale,
+    "ppσ": HARRISON_ETA["ppσ"] * scale,
+    "ppπ": HARRISON_ETA["ppπ"] * scale,
   };
 }
 
@@ -39,8 +39,8 @@ const isHarrisonType = (bond: BondType): bond is HarrisonBondType => bond in HAR
 export function withHarrisonStartingValues(compiled: CompiledModel): ModelDocument {
   const values = new Map<string, number>();
   for (const origin of compiled.bondIntegrals)
-    if (origin.matrix === "hamiltonian" && isHarrisonType(origin.bond))
-      values.set(origin.parameter, harrisonBondIntegrals(origin.distance)[origin.bond]);
+    if (origin.integral.matrix === "hamiltonian" && isHarrisonType(origin.type))
+      values.set(origin.parameter, harrisonBondIntegrals(origin.distance)[origin.type]);
   return {
     ...compiled.document,
     parameters: compiled.document.parameters.map((p) => (values.has(p.name) ? { ...p, value: values.get(p.name)! } : p)),

@@ -18,7 +18,7 @@ const T2G_AXES: Partial<Record<OrbitalName, [number, number]>> = { dxy: [0, 1], 
  * @param b - orbital on the second atom
  * @param direction - unit vector (l, m, n) from the first atom to the second (dimensionless)
  * @param v - bond-integral values; for a pair of shells in descending order the integral of the ascending
- *   order is used (V_psσ = V_spσ of the reversed bond)
+ *   order is used (V(psσ) = V(spσ) of the reversed bond)
  */
 export function slaterKosterElement(a: OrbitalName, b: OrbitalName, direction: Vec3, v: BondIntegralValues): number {
   if (SHELL_ORDER[orbitalShell(a)] > SHELL_ORDER[orbitalShell(b)]) {
@@ -33,18 +33,18 @@ function ascendingElement(a: OrbitalName, b: OrbitalName, c: Vec3, v: BondIntegr
   const lb = angularMomentum(b);
   const sa = orbitalShell(a);
   if (la === 0 && lb === 0) {
-    const bond = sa === "s" ? (b === "s" ? "ss_sigma" : "ss*_sigma") : "s*s*_sigma";
+    const bond = sa === "s" ? (b === "s" ? "ssσ" : "ss*σ") : "s*s*σ";
     return v(bond);
   }
-  if (la === 0 && lb === 1) return c[P_AXIS[b]!] * v(sa === "s" ? "sp_sigma" : "s*p_sigma");
-  if (la === 0) return sdFactor(b, c) * v(sa === "s" ? "sd_sigma" : "s*d_sigma");
+  if (la === 0 && lb === 1) return c[P_AXIS[b]!] * v(sa === "s" ? "spσ" : "s*pσ");
+  if (la === 0) return sdFactor(b, c) * v(sa === "s" ? "sdσ" : "s*dσ");
   if (la === 1 && lb === 1) {
     const i = P_AXIS[a]!;
     const j = P_AXIS[b]!;
-    return c[i] * c[j] * (v("pp_sigma") - v("pp_pi")) + (i === j ? v("pp_pi") : 0);
+    return c[i] * c[j] * (v("ppσ") - v("ppπ")) + (i === j ? v("ppπ") : 0);
   }
-  if (la === 1) return pdElement(P_AXIS[a]!, b, c, v("pd_sigma"), v("pd_pi"));
-  return ddElement(a, b, c, v("dd_sigma"), v("dd_pi"), v("dd_delta"));
+  if (la === 1) return pdElement(P_AXIS[a]!, b, c, v("pdσ"), v("pdπ"));
+  return ddElement(a, b, c, v("ddσ"), v("ddπ"), v("ddδ"));
 }
 
 function sdFactor(d: OrbitalName, [l, m, n]: Vec3): number {

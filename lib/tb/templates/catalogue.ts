@@ -3,6 +3,7 @@ import { type KPath, type KPathDensity, type KPathVertex, buildKPath } from "../
 import type { Vec3 } from "../geometry/vec3";
 import { compileModel } from "../model/compile";
 import { type ModelIssue, ModelError } from "../model/errors";
+import { canonicalParameterName } from "../model/parameter-names";
 import type { KPathPoint, ModelDocument, ModelParameter } from "../model/schema";
 import { diamondSp3sStar, zincblendeSp3sStar } from "./semiconductors";
 import { bccS, chainS, cubicSimpleS, fccS, honeycombPz, squareSingle } from "./simple-lattices";
@@ -120,13 +121,15 @@ export function buildTemplate(id: string, options: TemplateOptions = {}): ModelD
   };
   const body = definition.body(geometry);
   const known = new Set(body.parameters.map((p) => p.name));
-  for (const name of Object.keys(options.parameters ?? {}))
-    if (!known.has(name))
+  // Overrides may name bond integrals in the earlier spelling (V_pp_pi[Si-Si,1]).
+  const overrides = new Map(Object.entries(options.parameters ?? {}).map(([name, o]) => [canonicalParameterName(name), { name, o }]));
+  for (const [canonical, { name }] of overrides)
+    if (!known.has(canonical))
       issues.push({ path: `parameters.${name}`, message: `template ${id} has no parameter "${name}"; it has ${[...known].join(", ")}` });
   if (issues.length) throw new ModelError(issues);
 
   const parameters = body.parameters.map((p) => {
-    const o = options.parameters?.[p.name];
+    const o = overrides.get(p.name)?.o;
     return o ? { ...p, ...Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined)) } : p;
   });
   const doc: ModelDocument = {
@@ -145,8 +148,8 @@ export function buildTemplate(id: string, options: TemplateOptions = {}): ModelD
     kPath: definition.kPath,
     template: id,
   };
-  compileModel(doc);
-  return doc;
+  // the compiled (parsed) document: defaults and each bond integral's structured key filled in
+  return compileModel(doc).document;
 }
 
 /**

@@ -140,7 +140,7 @@ function cubicS(
     body: (g) => ({
       parameters: [
         parameter(`E_s[${element}]`, 0, "on-site energy of s (sets the zero)"),
-        parameter(`V_ss_sigma[${element}-${element},1]`, harrisonBondIntegrals(shellDistances(g, 1)[0]).ss_sigma, "ssσ, first shell"),
+        parameter(`V_ssσ[${element}–${element},1]`, harrisonBondIntegrals(shellDistances(g, 1)[0])["ssσ"], "ssσ, first shell"),
       ],
       slaterKoster: { maxShell: 1, tolerance: 1e-3, overlap: false },
     }),

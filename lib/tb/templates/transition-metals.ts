@@ -1,5 +1,6 @@
 import type { Vec3 } from "../geometry/vec3";
-import { BOND_TYPES, type BondType } from "../slater-koster/bond-types";
+import { bondIntegralName } from "../model/parameter-names";
+import { BOND_TYPES, type BondType, splitBondType } from "../slater-koster/bond-types";
 import { HBAR2_OVER_M, harrisonBondIntegrals } from "../slater-koster/harrison";
 import type { ModelParameter } from "../model/schema";
 import { shellDistances } from "./geometry-hoppings";
@@ -11,18 +12,18 @@ import { type TemplateDefinition, type TemplateGeometry, parameter } from "./typ
  * V_ldm = η_ldm ħ² r_d^{3/2} / (m d^{7/2}) for l = s, p and V_ddm = η_ddm ħ² r_d³ / (m d⁵).
  */
 const ETA_D: Partial<Record<BondType, number>> = {
-  sd_sigma: -3.16,
-  pd_sigma: -2.95,
-  pd_pi: 1.36,
-  dd_sigma: -16.2,
-  dd_pi: 8.75,
-  dd_delta: 0,
+  "sdσ": -3.16,
+  "pdσ": -2.95,
+  "pdπ": 1.36,
+  "ddσ": -16.2,
+  "ddπ": 8.75,
+  "ddδ": 0,
 };
 
 const SPD_BONDS = BOND_TYPES.filter((b) => !b.includes("*"));
 
 function harrisonSpd(bond: BondType, distance: number, rd: number): number {
-  if (bond === "ss_sigma" || bond === "sp_sigma" || bond === "pp_sigma" || bond === "pp_pi")
+  if (bond === "ssσ" || bond === "spσ" || bond === "ppσ" || bond === "ppπ")
     return harrisonBondIntegrals(distance)[bond];
   const eta = ETA_D[bond]!;
   if (bond.startsWith("dd")) return (eta * HBAR2_OVER_M * rd ** 3) / distance ** 5;
@@ -64,7 +65,11 @@ function spdTemplate(
       const distances = shellDistances(g, 2);
       const bonds: ModelParameter[] = distances.flatMap((d, i) =>
         SPD_BONDS.map((bond) =>
-          parameter(`V_${bond}[${element}-${element},${i + 1}]`, harrisonSpd(bond, d, rd), `${bond.replace("_", " ")}, shell ${i + 1}`),
+          parameter(
+            bondIntegralName({ matrix: "hamiltonian", ...splitBondType(bond), pair: [element, element], shell: i + 1 }),
+            harrisonSpd(bond, d, rd),
+            `${bond}, shell ${i + 1}`,
+          ),
         ),
       );
       return {

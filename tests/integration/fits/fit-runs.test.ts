@@ -186,10 +186,10 @@ describe("a new revision with its own model", () => {
     const unknown = await team.editor.post(`${base()}/fits/${fitId}/revisions`, {
       from: 1,
       model: { template: "honeycomb-pz" },
-      parameters: { "V_ss_sigma[Si-Si,1]": { value: 1 } },
+      parameters: { "V_ssσ[Si–Si,1]": { value: 1 } },
     });
     expect(unknown.status).toBe(422);
-    expect(JSON.stringify(unknown.body)).toContain('the model has no parameter \\"V_ss_sigma[Si-Si,1]\\"');
+    expect(JSON.stringify(unknown.body)).toContain('the model has no parameter \\"V_ssσ[Si–Si,1]\\"');
     expect((await waitForRevision(team.viewer, path, isFinal)).status).toBe("succeeded");
   });
 });

@@ -105,7 +105,7 @@ export function longFit(datasetId: string, timeLimitMs: number) {
   return {
     datasetId,
     name: "long silicon fit",
-    model: { template: "diamond-sp3s-star", parameters: { "E_s[Si]": { value: -3.5 }, "V_ss_sigma[Si-Si,1]": { value: -1.6 } } },
+    model: { template: "diamond-sp3s-star", parameters: { "E_s[Si]": { value: -3.5 }, "V_ssσ[Si–Si,1]": { value: -1.6 } } },
     mapping: { kind: "offset", dataBands: [1, 8] },
     options: { starts: 1000, timeLimitMs, maxIterations: 200 },
   };

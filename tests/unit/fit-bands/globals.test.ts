@@ -36,7 +36,7 @@ describe("energy offset and renormalisation", () => {
     const points = exact.map((p) => ({ ...p, energy: p.energy / 1.25 - 0.2 }));
     const result = await runBandFit({
       points,
-      model: { template: "diamond-sp3s-star", parameters: { "E_s[Si]": { free: false }, "V_ss_sigma[Si-Si,1]": { free: false } } },
+      model: { template: "diamond-sp3s-star", parameters: { "E_s[Si]": { free: false }, "V_ssσ[Si–Si,1]": { free: false } } },
       options: { energyOffset: { value: 0, free: true }, renormalisation: { value: 1, free: true } },
     });
     expect(result.parameters.find((p) => p.name === "renormalisation")!.value).toBeCloseTo(1.25, 8);

@@ -38,26 +38,26 @@ describe("implausible parameter values", () => {
   it("flags a standard error above the data's scale but not a small value with a smaller error", () => {
     const warnings = implausibleParameterWarnings(
       [
-        { parameter: fitted("V_s*p_sigma[Si-Si,1]", 20, 13), unit: "eV", isOverlap: false },
+        { parameter: fitted("V_s*pσ[Si–Si,1]", 20, 13), unit: "eV", isOverlap: false },
         // 0.001 ± 0.003 eV: consistent with zero, but the data do pin it to a few meV — determined.
         { parameter: fitted("t''", 0.001, 0.003), unit: "eV", isOverlap: false },
       ],
       scale,
     );
-    expect(warnings.map((w) => w.parameters)).toEqual([["V_s*p_sigma[Si-Si,1]"]]);
+    expect(warnings.map((w) => w.parameters)).toEqual([["V_s*pσ[Si–Si,1]"]]);
     expect(warnings[0].message).toContain("standard error");
   });
 
   it("flags an overlap of magnitude ≥ 1 (Cauchy–Schwarz for normalised orbitals) but not a renormalisation factor of 2", () => {
     const warnings = implausibleParameterWarnings(
       [
-        { parameter: fitted("S_pp_pi[C-C,1]", -1.2, 0.01), unit: "1", isOverlap: true },
+        { parameter: fitted("S_ppπ[C–C,1]", -1.2, 0.01), unit: "1", isOverlap: true },
         { parameter: fitted("renormalisation", 2, 0.05), unit: "1", isOverlap: false },
-        { parameter: fitted("S_pp_pi[C-C,2]", 0.1, 1.5), unit: "1", isOverlap: true },
+        { parameter: fitted("S_ppπ[C–C,2]", 0.1, 1.5), unit: "1", isOverlap: true },
       ],
       scale,
     );
-    expect(warnings.map((w) => w.parameters)).toEqual([["S_pp_pi[C-C,1]"], ["S_pp_pi[C-C,2]"]]);
+    expect(warnings.map((w) => w.parameters)).toEqual([["S_ppπ[C–C,1]"], ["S_ppπ[C–C,2]"]]);
   });
 
   it("ignores fixed parameters", () => {

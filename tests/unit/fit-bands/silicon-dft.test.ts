@@ -46,9 +46,9 @@ describe("silicon DFT bands and the sp3s* template", () => {
     // The template's only bound is its documented E_s* ≥ E_p (s* is Vogl et al.'s excited level); no bound is set here.
     const sStar = result.parameters.filter((p) => p.name.includes("s*") && p.free);
     const sp3 = result.parameters.filter((p) => !p.name.includes("s*") && p.free);
-    expect(sStar.map((p) => p.name).sort()).toEqual(["E_s*[Si]", "V_s*p_sigma[Si-Si,1]"]);
+    expect(sStar.map((p) => p.name).sort()).toEqual(["E_s*[Si]", "V_s*pσ[Si–Si,1]"]);
     const energy = sStar.find((p) => p.name === "E_s*[Si]")!;
-    const coupling = sStar.find((p) => p.name === "V_s*p_sigma[Si-Si,1]")!;
+    const coupling = sStar.find((p) => p.name === "V_s*pσ[Si–Si,1]")!;
     expect([energy.min, energy.max, coupling.min, coupling.max]).toEqual([1.715, undefined, undefined, undefined]);
     // Valence bands feel s* only through V_s*p² / (E_s* − E) (second-order perturbation theory, common
     // practice), so E_s* and V_s*p run away together: both flagged, neither reported as determined.

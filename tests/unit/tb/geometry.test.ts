@@ -88,10 +88,10 @@ describe("k-paths", () => {
 describe("Harrison's universal sp parameters (Harrison 1980, Solid State Table; REFERENCES.md §2)", () => {
   it("Si at d = 2.35 Å: V_ssσ −1.932, V_spσ +2.539, V_ppσ +4.471, V_ppπ −1.118 (computed worked example)", () => {
     const v = harrisonBondIntegrals(2.35);
-    expect(v.ss_sigma).toBeCloseTo(-1.932, 3);
-    expect(v.sp_sigma).toBeCloseTo(2.539, 3);
-    expect(v.pp_sigma).toBeCloseTo(4.471, 3);
-    expect(v.pp_pi).toBeCloseTo(-1.118, 3);
+    expect(v["ssσ"]).toBeCloseTo(-1.932, 3);
+    expect(v["spσ"]).toBeCloseTo(2.539, 3);
+    expect(v["ppσ"]).toBeCloseTo(4.471, 3);
+    expect(v["ppπ"]).toBeCloseTo(-1.118, 3);
   });
 
   it("applies them to a model's sp bond integrals at each shell's bond length and leaves the rest alone", () => {
@@ -99,9 +99,9 @@ describe("Harrison's universal sp parameters (Harrison 1980, Solid State Table; 
     const doc = withHarrisonStartingValues(compiled);
     const value = (name: string) => doc.parameters.find((p) => p.name === name)!.value;
     const d = (Math.sqrt(3) * 5.431) / 4;
-    expect(value("V_pp_pi[Si-Si,1]")).toBeCloseTo(harrisonBondIntegrals(d).pp_pi, 12);
-    expect(value("V_sp_sigma[Si-Si,1]")).toBeCloseTo(harrisonBondIntegrals(d).sp_sigma, 12);
+    expect(value("V_ppπ[Si–Si,1]")).toBeCloseTo(harrisonBondIntegrals(d)["ppπ"], 12);
+    expect(value("V_spσ[Si–Si,1]")).toBeCloseTo(harrisonBondIntegrals(d)["spσ"], 12);
     expect(value("E_s[Si]")).toBe(-4.2); // on-site untouched (Vogl–Hjalmarson–Dow 1983)
-    expect(value("V_s*p_sigma[Si-Si,1]")).toBe(compiled.parameters.find((p) => p.name === "V_s*p_sigma[Si-Si,1]")!.value);
+    expect(value("V_s*pσ[Si–Si,1]")).toBe(compiled.parameters.find((p) => p.name === "V_s*pσ[Si–Si,1]")!.value);
   });
 });

@@ -3,20 +3,20 @@ import { createRandom, eigenHermitian, complexMatrixFromRows } from "@/lib/linal
 import { type BondType, type OrbitalName, type Vec3, slaterKosterElement } from "@/lib/tb";
 
 const V: Record<BondType, number> = {
-  ss_sigma: -1.3,
-  "ss*_sigma": -0.4,
-  "s*s*_sigma": -0.2,
-  sp_sigma: 1.7,
-  "s*p_sigma": 1.1,
-  sd_sigma: -0.9,
-  "s*d_sigma": -0.3,
-  pp_sigma: 2.9,
-  pp_pi: -0.8,
-  pd_sigma: -1.6,
-  pd_pi: 0.7,
-  dd_sigma: -0.55,
-  dd_pi: 0.31,
-  dd_delta: -0.07,
+  "ssσ": -1.3,
+  "ss*σ": -0.4,
+  "s*s*σ": -0.2,
+  "spσ": 1.7,
+  "s*pσ": 1.1,
+  "sdσ": -0.9,
+  "s*dσ": -0.3,
+  "ppσ": 2.9,
+  "ppπ": -0.8,
+  "pdσ": -1.6,
+  "pdπ": 0.7,
+  "ddσ": -0.55,
+  "ddπ": 0.31,
+  "ddδ": -0.07,
 };
 const v = (b: BondType) => V[b];
 const P: OrbitalName[] = ["px", "py", "pz"];
@@ -43,32 +43,32 @@ describe("Slater–Koster table (Slater & Koster, Phys. Rev. 94, 1498 (1954), Ta
     const s3 = Math.sqrt(3);
     for (const [l, m, n] of directions) {
       const c: Vec3 = [l, m, n];
-      expect(slaterKosterElement("s", "px", c, v)).toBeCloseTo(l * V.sp_sigma, 12);
-      expect(slaterKosterElement("px", "s", c, v)).toBeCloseTo(-l * V.sp_sigma, 12); // E_x,s = −l V_spσ
-      expect(slaterKosterElement("px", "px", c, v)).toBeCloseTo(l * l * V.pp_sigma + (1 - l * l) * V.pp_pi, 12);
-      expect(slaterKosterElement("px", "py", c, v)).toBeCloseTo(l * m * (V.pp_sigma - V.pp_pi), 12);
-      expect(slaterKosterElement("s", "dxy", c, v)).toBeCloseTo(s3 * l * m * V.sd_sigma, 12);
-      expect(slaterKosterElement("s", "dz2", c, v)).toBeCloseTo((n * n - (l * l + m * m) / 2) * V.sd_sigma, 12);
-      expect(slaterKosterElement("px", "dxy", c, v)).toBeCloseTo(s3 * l * l * m * V.pd_sigma + m * (1 - 2 * l * l) * V.pd_pi, 12);
-      expect(slaterKosterElement("px", "dyz", c, v)).toBeCloseTo(s3 * l * m * n * V.pd_sigma - 2 * l * m * n * V.pd_pi, 12);
+      expect(slaterKosterElement("s", "px", c, v)).toBeCloseTo(l * V["spσ"], 12);
+      expect(slaterKosterElement("px", "s", c, v)).toBeCloseTo(-l * V["spσ"], 12); // E_x,s = −l V_spσ
+      expect(slaterKosterElement("px", "px", c, v)).toBeCloseTo(l * l * V["ppσ"] + (1 - l * l) * V["ppπ"], 12);
+      expect(slaterKosterElement("px", "py", c, v)).toBeCloseTo(l * m * (V["ppσ"] - V["ppπ"]), 12);
+      expect(slaterKosterElement("s", "dxy", c, v)).toBeCloseTo(s3 * l * m * V["sdσ"], 12);
+      expect(slaterKosterElement("s", "dz2", c, v)).toBeCloseTo((n * n - (l * l + m * m) / 2) * V["sdσ"], 12);
+      expect(slaterKosterElement("px", "dxy", c, v)).toBeCloseTo(s3 * l * l * m * V["pdσ"] + m * (1 - 2 * l * l) * V["pdπ"], 12);
+      expect(slaterKosterElement("px", "dyz", c, v)).toBeCloseTo(s3 * l * m * n * V["pdσ"] - 2 * l * m * n * V["pdπ"], 12);
       expect(slaterKosterElement("py", "dx2-y2", c, v)).toBeCloseTo(
-        (s3 / 2) * m * (l * l - m * m) * V.pd_sigma - m * (1 + l * l - m * m) * V.pd_pi,
+        (s3 / 2) * m * (l * l - m * m) * V["pdσ"] - m * (1 + l * l - m * m) * V["pdπ"],
         12,
       );
       expect(slaterKosterElement("pz", "dz2", c, v)).toBeCloseTo(
-        n * (n * n - (l * l + m * m) / 2) * V.pd_sigma + s3 * n * (l * l + m * m) * V.pd_pi,
+        n * (n * n - (l * l + m * m) / 2) * V["pdσ"] + s3 * n * (l * l + m * m) * V["pdπ"],
         12,
       );
       expect(slaterKosterElement("dxy", "dxy", c, v)).toBeCloseTo(
-        3 * l * l * m * m * V.dd_sigma + (l * l + m * m - 4 * l * l * m * m) * V.dd_pi + (n * n + l * l * m * m) * V.dd_delta,
+        3 * l * l * m * m * V["ddσ"] + (l * l + m * m - 4 * l * l * m * m) * V["ddπ"] + (n * n + l * l * m * m) * V["ddδ"],
         12,
       );
       expect(slaterKosterElement("dxy", "dyz", c, v)).toBeCloseTo(
-        3 * l * m * m * n * V.dd_sigma + l * n * (1 - 4 * m * m) * V.dd_pi + l * n * (m * m - 1) * V.dd_delta,
+        3 * l * m * m * n * V["ddσ"] + l * n * (1 - 4 * m * m) * V["ddπ"] + l * n * (m * m - 1) * V["ddδ"],
         12,
       );
       expect(slaterKosterElement("dz2", "dz2", c, v)).toBeCloseTo(
-        (n * n - (l * l + m * m) / 2) ** 2 * V.dd_sigma + 3 * n * n * (l * l + m * m) * V.dd_pi + 0.75 * (l * l + m * m) ** 2 * V.dd_delta,
+        (n * n - (l * l + m * m) / 2) ** 2 * V["ddσ"] + 3 * n * n * (l * l + m * m) * V["ddπ"] + 0.75 * (l * l + m * m) ** 2 * V["ddδ"],
         12,
       );
       // reversed order: E_d,p = (−1)^(1+2) E_p,d
@@ -80,19 +80,19 @@ describe("Slater–Koster table (Slater & Koster, Phys. Rev. 94, 1498 (1954), Ta
     // Invariants listed in REFERENCES.md §1 (computed): in the bond frame each block is diagonal in m.
     for (const c of directions) {
       expect(symmetricEigenvalues(block(P, P, c))).toEqual(
-        [V.pp_pi, V.pp_pi, V.pp_sigma].sort((a, b) => a - b).map((x) => expect.closeTo(x, 10)),
+        [V["ppπ"], V["ppπ"], V["ppσ"]].sort((a, b) => a - b).map((x) => expect.closeTo(x, 10)),
       );
       expect(symmetricEigenvalues(block(D, D, c))).toEqual(
-        [V.dd_sigma, V.dd_pi, V.dd_pi, V.dd_delta, V.dd_delta].sort((a, b) => a - b).map((x) => expect.closeTo(x, 10)),
+        [V["ddσ"], V["ddπ"], V["ddπ"], V["ddδ"], V["ddδ"]].sort((a, b) => a - b).map((x) => expect.closeTo(x, 10)),
       );
       const pd = block(P, D, c);
       const pdpdT = P.map((_, i) => P.map((__, j) => pd[i].reduce((s, x, k) => s + x * pd[j][k], 0)));
       expect(symmetricEigenvalues(pdpdT)).toEqual(
-        [V.pd_pi ** 2, V.pd_pi ** 2, V.pd_sigma ** 2].sort((a, b) => a - b).map((x) => expect.closeTo(x, 10)),
+        [V["pdπ"] ** 2, V["pdπ"] ** 2, V["pdσ"] ** 2].sort((a, b) => a - b).map((x) => expect.closeTo(x, 10)),
       );
-      expect(Math.hypot(...block(["s"], P, c)[0])).toBeCloseTo(Math.abs(V.sp_sigma), 12);
-      expect(Math.hypot(...block(["s"], D, c)[0])).toBeCloseTo(Math.abs(V.sd_sigma), 12);
-      expect(Math.hypot(...block(["s*"], P, c)[0])).toBeCloseTo(Math.abs(V["s*p_sigma"]), 12);
+      expect(Math.hypot(...block(["s"], P, c)[0])).toBeCloseTo(Math.abs(V["spσ"]), 12);
+      expect(Math.hypot(...block(["s"], D, c)[0])).toBeCloseTo(Math.abs(V["sdσ"]), 12);
+      expect(Math.hypot(...block(["s*"], P, c)[0])).toBeCloseTo(Math.abs(V["s*pσ"]), 12);
     }
   });
 

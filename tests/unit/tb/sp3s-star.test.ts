@@ -52,13 +52,13 @@ describe("sp3s* zinc-blende at Γ", () => {
       const half = Math.hypot((ea - ec) / 2, v);
       return [mid - half, mid + half];
     };
-    const [s1, s2] = pair(p("E_s[As]"), p("E_s[Ga]"), 4 * p("V_ss_sigma[As-Ga,1]"));
-    const [p1, p2] = pair(p("E_p[As]"), p("E_p[Ga]"), (4 / 3) * (p("V_pp_sigma[As-Ga,1]") + 2 * p("V_pp_pi[As-Ga,1]")));
+    const [s1, s2] = pair(p("E_s[As]"), p("E_s[Ga]"), 4 * p("V_ssσ[As–Ga,1]"));
+    const [p1, p2] = pair(p("E_p[As]"), p("E_p[Ga]"), (4 / 3) * (p("V_ppσ[As–Ga,1]") + 2 * p("V_ppπ[As–Ga,1]")));
     const expected = [s1, s2, p1, p1, p1, p2, p2, p2, p("E_s*[As]"), p("E_s*[Ga]")].sort((a, b) => a - b);
     const energies = Array.from(computeBands(compileModel(doc), undefined, [[0, 0, 0]]).energies);
     expect(energies).toEqual(expected.map((e) => expect.closeTo(e, 10)));
     // combined elements recovered from the converted bond integrals (Vogl et al. 1983 GaAs, from memory)
-    expect(4 * p("V_ss_sigma[As-Ga,1]")).toBeCloseTo(-6.4513, 10);
-    expect((4 / Math.sqrt(3)) * p("V_sp_sigma[Ga-As,1]")).toBeCloseTo(5.7839, 10);
+    expect(4 * p("V_ssσ[As–Ga,1]")).toBeCloseTo(-6.4513, 10);
+    expect((4 / Math.sqrt(3)) * p("V_spσ[Ga–As,1]")).toBeCloseTo(5.7839, 10);
   });
 });

@@ -3,7 +3,7 @@ import { getRevision } from "@/db/queries/fits";
 import { AppError } from "@/lib/server/errors";
 import { newRevisionSchema } from "@/lib/server/fits/inputs";
 import { launchRevision } from "@/lib/server/fits/launch";
-import { requireFit } from "@/lib/server/fits/views";
+import { requireFit, resultOf } from "@/lib/server/fits/views";
 import { workspaceRoute } from "@/lib/server/route";
 
 /**
@@ -19,7 +19,7 @@ export const POST = workspaceRoute({ minimumRole: "editor", input: newRevisionSc
     userId: access.user.id,
     fitId: fit.id,
     datasetId: fit.datasetId,
-    parent: { inputs: parent.revision.inputs, result: parent.revision.result },
+    parent: { inputs: parent.revision.inputs, result: resultOf(parent) },
     input,
   });
   return NextResponse.json(launched, { status: 201 });
