@@ -2,7 +2,7 @@
 
 import { formatQuantity } from "@/components/format";
 import { Badge, Notice, Panel } from "@/components/ui";
-import { revisionTransform } from "@/lib/views/band-series";
+import { revisionAlignment } from "@/lib/fit/bands/energy-alignment";
 import { compareBands, compareParameters } from "@/lib/views/compare";
 import { useDatasetPoints, useRevision } from "./hooks";
 import { OverlayPanel } from "./overlay-panel";
@@ -99,8 +99,8 @@ export function CompareView({ slug, fitId, a, b }: { slug: string; fitId: string
             dataset={data.dataset}
             points={data.points}
             models={[
-              { key: "a", label: `revision ${a}`, model: resA.fittedModel, transform: revisionTransform(resA.parameters, ra.data.inputs.options) },
-              { key: "b", label: `revision ${b}`, model: resB.fittedModel, transform: revisionTransform(resB.parameters, rb.data.inputs.options), dashed: true },
+              { key: "a", label: `revision ${a}`, model: resA.fittedModel, alignment: revisionAlignment(resA.parameters, ra.data.inputs.options) },
+              { key: "b", label: `revision ${b}`, model: resB.fittedModel, alignment: revisionAlignment(resB.parameters, rb.data.inputs.options), dashed: true },
             ]}
             mapping={ra.data.inputs.mapping}
             window={ra.data.inputs.window}

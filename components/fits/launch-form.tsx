@@ -4,8 +4,8 @@ import { useMutation, useQuery } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useDeferredValue, useMemo, useState } from "react";
 import { Button, Notice, Panel, SelectField, TextField } from "@/components/ui";
+import { NEUTRAL_ALIGNMENT } from "@/lib/fit/bands/energy-alignment";
 import { DEFAULT_BAND_MAPPING, bandMappingSchema, fitOptionsSchema, modelSpecSchema, resolveModelSpec } from "@/lib/fit/bands/schema";
-import { IDENTITY_TRANSFORM } from "@/lib/views/band-series";
 import { TEMPLATE_IDS, type ModelDocument, type TemplateId, buildTemplate } from "@/lib/tb";
 import { dataBandStyles } from "@/lib/views/band-colours";
 import { bandPairs } from "@/lib/views/band-mapping";
@@ -126,9 +126,9 @@ export function LaunchForm({ slug, mode }: LaunchFormProps) {
   }, [reading]);
   const previewMapping = reading.ok ? bandMappingSchema.parse(reading.request.mapping ?? DEFAULT_BAND_MAPPING) : DEFAULT_BAND_MAPPING;
   const previewOptions = fitOptionsSchema.safeParse(reading.ok ? reading.request.options : {});
-  const previewTransform = previewOptions.success
+  const previewAlignment = previewOptions.success
     ? { offset: previewOptions.data.energyOffset.value, renormalisation: previewOptions.data.renormalisation.value, reference: previewOptions.data.renormalisation.reference }
-    : IDENTITY_TRANSFORM;
+    : NEUTRAL_ALIGNMENT;
 
   const bands = data.dataset?.summary.bands ?? [];
   // The number of model bands depends on the sites and orbitals only, not on the values being edited.
@@ -221,7 +221,7 @@ export function LaunchForm({ slug, mode }: LaunchFormProps) {
             <OverlayPanel
               dataset={data.dataset}
               points={data.points}
-              models={[{ key: "preview", label: "model", model: preview.model, transform: previewTransform }]}
+              models={[{ key: "preview", label: "model", model: preview.model, alignment: previewAlignment }]}
               mapping={previewMapping}
               window={window}
               showResiduals={false}

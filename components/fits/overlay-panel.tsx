@@ -8,7 +8,6 @@ import { Button, Input, Notice } from "@/components/ui";
 import { dataBandStyles, modelBandStyles } from "@/lib/views/band-colours";
 import { bandPairs } from "@/lib/views/band-mapping";
 import {
-  type EnergyTransform,
   type ModelBandLine,
   chartResiduals,
   dataSeriesByBand,
@@ -20,6 +19,7 @@ import {
 import { readNumber } from "@/lib/views/number-field";
 import type { ChartPoints, DatasetDetails } from "@/lib/views/responses";
 import { pathTicks } from "@/lib/views/ticks";
+import type { EnergyAlignment } from "@/lib/fit/bands/energy-alignment";
 import type { BandMapping, EnergyWindow } from "@/lib/fit/bands/schema";
 import type { ModelDocument } from "@/lib/tb";
 import type { ChartFigureSource } from "@/lib/views/figure";
@@ -31,7 +31,8 @@ export interface OverlayModel {
   key: string;
   label: string;
   model: ModelDocument;
-  transform: EnergyTransform;
+  /** δ, Z and E_ref the model's energies are drawn with */
+  alignment: EnergyAlignment;
   dashed?: boolean;
 }
 
@@ -79,7 +80,7 @@ export function OverlayPanel({
     () =>
       models.map((m) => {
         try {
-          return { ...m, lines: modelBandLines(m.model, kPoints, m.transform), error: null };
+          return { ...m, lines: modelBandLines(m.model, kPoints, m.alignment), error: null };
         } catch (error) {
           return { ...m, lines: [] as ModelBandLine[], error: (error as Error).message };
         }
@@ -117,7 +118,7 @@ export function OverlayPanel({
 
   const residuals = useMemo(() => {
     if (!showResiduals || !computed[0] || computed[0].error) return [];
-    const energies = modelEnergiesByKIndex(computed[0].model, chartPoints, computed[0].transform);
+    const energies = modelEnergiesByKIndex(computed[0].model, chartPoints, computed[0].alignment);
     const modelBandOf = (b: number) => (mapping.kind === "nearest" ? ("nearest" as const) : (pairs.find((p) => p.dataBand === b)?.modelBand ?? null));
     return chartResiduals(chartPoints, energies, modelBandOf, window);
   }, [showResiduals, computed, mapping, pairs, chartPoints, window]);

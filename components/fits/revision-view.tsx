@@ -2,7 +2,7 @@
 
 import { formatDateTime, formatQuantity } from "@/components/format";
 import { ButtonLink, EmptyState, Notice, Panel, buttonClasses } from "@/components/ui";
-import { revisionTransform } from "@/lib/views/band-series";
+import { revisionAlignment } from "@/lib/fit/bands/energy-alignment";
 import type { RevisionDetails } from "@/lib/views/responses";
 import { fitRoutes } from "./api";
 import { BandTable } from "./band-table";
@@ -116,7 +116,7 @@ export function RevisionView({ slug, fitId, number, canEdit }: { slug: string; f
                 <OverlayPanel
                   dataset={data.dataset}
                   points={data.points}
-                  models={[{ key: "fit", label: `revision ${number}`, model: result.fittedModel, transform: revisionTransform(result.parameters, r.inputs.options) }]}
+                  models={[{ key: "fit", label: `revision ${number}`, model: result.fittedModel, alignment: revisionAlignment(result.parameters, r.inputs.options) }]}
                   mapping={r.inputs.mapping}
                   window={r.inputs.window}
                   showResiduals

@@ -1,3 +1,4 @@
+import { type EnergyAlignment, alignEnergy } from "@/lib/fit/bands/energy-alignment";
 import { type ModelDocument, type Vec3, compileModel, computeBands, templateKPath } from "@/lib/tb";
 
 /** One residual row as stored (energies eV, path distance 1/Å). */
@@ -23,13 +24,6 @@ export function residualsCsv(rows: readonly ResidualCsvRow[]): string {
   return lines.join("\n") + "\n";
 }
 
-/** The fit's energy alignment: E_aligned = reference + (E − reference)/renormalisation + offset (eV). */
-export interface EnergyAlignment {
-  offset: number;
-  renormalisation: number;
-  reference: number;
-}
-
 /** Points of the dense path per 1/Å of path length (common practice for smooth band plots). */
 export const DENSE_PATH_POINTS_PER_INVERSE_ANGSTROM = 100;
 
@@ -41,7 +35,6 @@ export const DENSE_PATH_POINTS_PER_INVERSE_ANGSTROM = 100;
  */
 export function bandsCsv(model: ModelDocument, dataK: readonly { k: Vec3; pathDistance: number }[], alignment: EnergyAlignment): string {
   const compiled = compileModel(model);
-  const align = (e: number) => alignment.reference + (e - alignment.reference) / alignment.renormalisation + alignment.offset;
   const lines = ["section,k_index,path_distance_inv_angstrom,kx,ky,kz,band,energy_ev,aligned_energy_ev"];
   const emit = (section: string, points: readonly { k: Vec3; pathDistance: number }[]) => {
     const { energies } = computeBands(compiled, undefined, points.map((p) => p.k));
@@ -49,7 +42,7 @@ export function bandsCsv(model: ModelDocument, dataK: readonly { k: Vec3; pathDi
     points.forEach((p, i) => {
       for (let band = 0; band < n; band++) {
         const e = energies[i * n + band];
-        lines.push([section, i, p.pathDistance, p.k[0], p.k[1], p.k[2], band + 1, e, align(e)].map(String).join(","));
+        lines.push([section, i, p.pathDistance, p.k[0], p.k[1], p.k[2], band + 1, e, alignEnergy(e, alignment)].map(String).join(","));
       }
     });
   };

@@ -6,4 +6,4 @@ export {
   parameterSetJsonSchema,
   parameterSetSchema,
 } from "./parameter-set";
-export { DENSE_PATH_POINTS_PER_INVERSE_ANGSTROM, type EnergyAlignment, type ResidualCsvRow, bandsCsv, residualsCsv } from "./csv";
+export { DENSE_PATH_POINTS_PER_INVERSE_ANGSTROM, type ResidualCsvRow, bandsCsv, residualsCsv } from "./csv";

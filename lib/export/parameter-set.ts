@@ -1,6 +1,6 @@
 import { z } from "zod";
 import type { BandFitResult } from "@/lib/fit/bands";
-import type { EnergyAlignment } from "./csv";
+import type { EnergyAlignment } from "@/lib/fit/bands/energy-alignment";
 import { type RealSpaceElement, compileModel, expandHoppings } from "@/lib/tb";
 
 /**

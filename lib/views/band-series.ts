@@ -1,3 +1,4 @@
+import { type EnergyAlignment, NEUTRAL_ALIGNMENT, alignEnergy } from "@/lib/fit/bands/energy-alignment";
 import { type ModelDocument, type Vec3, compileModel, computeBands } from "@/lib/tb";
 
 /** A data point on a band chart: path distance (1/Å), energy (eV) and, where the data give it, σ (eV). */
@@ -57,18 +58,6 @@ export interface ModelBandLine {
 }
 
 /**
- * The global energy terms of a fit (eV; Z dimensionless): E_pred = E_ref + (E_model − E_ref)/Z + δ,
- * the band fit's own convention (lib/fit/bands/schema.ts).
- */
-export interface EnergyTransform {
-  offset: number;
-  renormalisation: number;
-  reference: number;
-}
-
-export const IDENTITY_TRANSFORM: EnergyTransform = { offset: 0, renormalisation: 1, reference: 0 };
-
-/**
  * Model bands along the data's own k-points, for drawing over the data: the k-points are sorted by path
  * distance, the bands computed with lib/tb, and the fit's offset and renormalisation applied.
  * Two k-points at the same path distance mark a jump in the path: the lines break there.
@@ -76,17 +65,16 @@ export const IDENTITY_TRANSFORM: EnergyTransform = { offset: 0, renormalisation:
  * @param kPoints - distinct k-points of the data (Cartesian 1/Å, in the model's frame)
  * @throws ModelError when the document does not compile
  */
-export function modelBandLines(model: ModelDocument, kPoints: readonly PathKPoint[], transform: EnergyTransform = IDENTITY_TRANSFORM): ModelBandLine[] {
+export function modelBandLines(model: ModelDocument, kPoints: readonly PathKPoint[], alignment: EnergyAlignment = NEUTRAL_ALIGNMENT): ModelBandLine[] {
   const sorted = [...kPoints].sort((a, b) => a.pathDistance - b.pathDistance);
   const compiled = compileModel(model);
   const n = compiled.orbitalCount;
   const { energies } = computeBands(compiled, undefined, sorted.map((p) => p.k));
-  const { offset, renormalisation, reference } = transform;
   return Array.from({ length: n }, (_, band) => {
     const points: { x: number; y: number | null }[] = [];
     sorted.forEach((p, i) => {
       if (i > 0 && p.pathDistance === sorted[i - 1].pathDistance) points.push({ x: p.pathDistance, y: null });
-      points.push({ x: p.pathDistance, y: reference + (energies[i * n + band] - reference) / renormalisation + offset });
+      points.push({ x: p.pathDistance, y: alignEnergy(energies[i * n + band], alignment) });
     });
     return { band: band + 1, points };
   });
@@ -153,22 +141,6 @@ export function energyDomain(points: readonly ChartDataPoint[], zoom?: { min: nu
   return [Math.floor((low - pad) / step) * step, Math.ceil((high + pad) / step) * step];
 }
 
-/**
- * The energy terms a revision used: δ and Z from the fitted parameters named "energy offset" and
- * "renormalisation" (the band fit lists them when free or not neutral), else from the options.
- */
-export function revisionTransform(
-  parameters: readonly { name: string; value: number }[],
-  options: { energyOffset: { value: number }; renormalisation: { value: number; reference: number } },
-): EnergyTransform {
-  const fitted = (name: string) => parameters.find((p) => p.name === name)?.value;
-  return {
-    offset: fitted("energy offset") ?? options.energyOffset.value,
-    renormalisation: fitted("renormalisation") ?? options.renormalisation.value,
-    reference: options.renormalisation.reference,
-  };
-}
-
 /** A residual (model − data, eV) at a path distance, for the residual chart. */
 export interface ChartResidual {
   band: number;
@@ -210,13 +182,12 @@ export function chartResiduals(
  * data, by k-point index — what {@link chartResiduals} compares with.
  * @param points - dataset points with `kIndex` and Cartesian `k` (1/Å)
  */
-export function modelEnergiesByKIndex(model: ModelDocument, points: readonly { kIndex: number; k: Vec3 }[], transform: EnergyTransform = IDENTITY_TRANSFORM): Map<number, number[]> {
+export function modelEnergiesByKIndex(model: ModelDocument, points: readonly { kIndex: number; k: Vec3 }[], alignment: EnergyAlignment = NEUTRAL_ALIGNMENT): Map<number, number[]> {
   const byIndex = new Map<number, Vec3>();
   for (const p of points) if (!byIndex.has(p.kIndex)) byIndex.set(p.kIndex, p.k);
   const indices = [...byIndex.keys()];
   const compiled = compileModel(model);
   const n = compiled.orbitalCount;
   const { energies } = computeBands(compiled, undefined, indices.map((i) => byIndex.get(i)!));
-  const { offset, renormalisation, reference } = transform;
-  return new Map(indices.map((index, i) => [index, Array.from(energies.subarray(i * n, (i + 1) * n), (e) => reference + (e - reference) / renormalisation + offset)]));
+  return new Map(indices.map((index, i) => [index, Array.from(energies.subarray(i * n, (i + 1) * n), (e) => alignEnergy(e, alignment))]));
 }

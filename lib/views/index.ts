@@ -5,10 +5,8 @@ export {
   type ChartDataPoint,
   type ChartPoint,
   type DataBandSeries,
-  type EnergyTransform,
   type ModelBandLine,
   type PathKPoint,
-  IDENTITY_TRANSFORM,
   dataSeriesByBand,
   distinctKPoints,
   energyDomain,
@@ -17,7 +15,6 @@ export {
   niceStep,
   type ChartResidual,
   chartResiduals,
-  revisionTransform,
 } from "./band-series";
 export {
   type BandComparisonRow,

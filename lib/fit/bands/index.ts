@@ -31,5 +31,14 @@ export {
 } from "./schema";
 export { BandFitError, runBandFit } from "./run";
 export { type BandFitValidation, type PreparedBandFit, validateBandFit } from "./validate";
-export { ENERGY_OFFSET, RENORMALISATION } from "./problem";
+export {
+  ENERGY_ALIGNMENT_FORMULA,
+  ENERGY_OFFSET,
+  type EnergyAlignment,
+  NEUTRAL_ALIGNMENT,
+  RENORMALISATION,
+  alignEnergy,
+  alignmentDerivatives,
+  revisionAlignment,
+} from "./energy-alignment";
 export { type StoredResult, readStoredResult } from "./stored-result";

@@ -1,11 +1,8 @@
 import { type PreparedHamiltonian, bandsWithGradients } from "@/lib/tb";
 import type { LeastSquaresProblem, ParameterSpec, ValuesWithJacobian } from "../least-squares";
 import type { KeptPoint } from "./points";
+import { type EnergyAlignment, alignEnergy, alignmentDerivatives } from "./energy-alignment";
 import type { BandMapping } from "./schema";
-
-/** Names of the two global parameters in results and warnings. */
-export const ENERGY_OFFSET = "energy offset";
-export const RENORMALISATION = "renormalisation";
 
 /** Where the global parameters sit in θ: after the model's own parameters. */
 export interface GlobalParameterSlots {
@@ -23,13 +20,13 @@ export interface Prediction {
 
 /**
  * The band fit as a least-squares problem. θ = [model parameters…, δ, Z]; for point p at k-point g
- *   f_p(θ) = E_ref + (E_m(p)(k_g) − E_ref)/Z + δ,
+ *   f_p(θ) = E_m(p)(k_g) aligned by δ, Z and E_ref (energy-alignment.ts: E_ref + (E − E_ref)/Z + δ),
  * with m(p) fixed by the offset mapping, or, for the nearest mapping, the band among the candidates
  * whose f is closest to the data energy at the θ being evaluated.
  *
- * Jacobian: ∂f_p/∂θ_i = (1/Z)·∂E_m/∂θ_i from Hellmann–Feynman (`bandsWithGradients`: one diagonalisation
- * per distinct k-point per evaluation, shared by every point at that k), ∂f_p/∂δ = 1,
- * ∂f_p/∂Z = −(E_m − E_ref)/Z². For the nearest mapping the assignment m(p) is held fixed while
+ * Jacobian: ∂f_p/∂θ_i = (∂f/∂E)·∂E_m/∂θ_i with ∂E_m/∂θ_i from Hellmann–Feynman (`bandsWithGradients`:
+ * one diagonalisation per distinct k-point per evaluation, shared by every point at that k), and ∂f_p/∂δ,
+ * ∂f_p/∂Z from `alignmentDerivatives`. For the nearest mapping the assignment m(p) is held fixed while
  * differentiating: the objective is piecewise smooth and this is its derivative wherever the assignment
  * does not switch (finite differences agree there).
  */
@@ -88,16 +85,16 @@ export class BandResidualModel {
     this.fill(theta, modelBands);
     const np = this.modelParameterCount;
     const width = np + 2;
-    const z = theta[this.slots.renormalisation];
-    const reference = this.slots.reference;
+    const alignment = this.alignmentAt(theta);
     const { gradients, energies, jacobian, bandCount } = this;
     this.points.forEach((point, i) => {
       const band = modelBands[i];
       const source = (point.kIndex * bandCount + band) * np;
       const row = i * width;
-      for (let j = 0; j < np; j++) jacobian[row + j] = gradients[source + j] / z;
-      jacobian[row + this.slots.offset] = 1;
-      jacobian[row + this.slots.renormalisation] = -(energies[point.kIndex * bandCount + band] - reference) / (z * z);
+      const d = alignmentDerivatives(energies[point.kIndex * bandCount + band], alignment);
+      for (let j = 0; j < np; j++) jacobian[row + j] = gradients[source + j] * d.energy;
+      jacobian[row + this.slots.offset] = d.offset;
+      jacobian[row + this.slots.renormalisation] = d.renormalisation;
     });
     return { values: this.values, jacobian };
   }
@@ -111,10 +108,12 @@ export class BandResidualModel {
     });
   }
 
+  private alignmentAt(theta: Float64Array): EnergyAlignment {
+    return { offset: theta[this.slots.offset], renormalisation: theta[this.slots.renormalisation], reference: this.slots.reference };
+  }
+
   private fill(theta: Float64Array, modelBands: Int32Array): void {
-    const delta = theta[this.slots.offset];
-    const z = theta[this.slots.renormalisation];
-    const reference = this.slots.reference;
+    const alignment = this.alignmentAt(theta);
     const { energies, values, bandCount } = this;
     const [low, high] = this.candidates;
     this.points.forEach((point, i) => {
@@ -124,7 +123,7 @@ export class BandResidualModel {
         band = low;
         let best = Infinity;
         for (let m = low; m <= high; m++) {
-          const distance = Math.abs(reference + (energies[base + m] - reference) / z + delta - point.energy);
+          const distance = Math.abs(alignEnergy(energies[base + m], alignment) - point.energy);
           if (distance < best) {
             best = distance;
             band = m;
@@ -132,7 +131,7 @@ export class BandResidualModel {
         }
       }
       modelBands[i] = band;
-      values[i] = reference + (energies[base + band] - reference) / z + delta;
+      values[i] = alignEnergy(energies[base + band], alignment);
     });
   }
 }

@@ -10,7 +10,8 @@ import {
 } from "@/lib/tb";
 import type { ParameterSpec } from "../least-squares";
 import { type PointSelection, selectPoints } from "./points";
-import { BandResidualModel, ENERGY_OFFSET, RENORMALISATION } from "./problem";
+import { ENERGY_OFFSET, RENORMALISATION } from "./energy-alignment";
+import { BandResidualModel } from "./problem";
 import { redundantWithGlobals } from "./redundancy";
 import {
   type BandFitIssue,

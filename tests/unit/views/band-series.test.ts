@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { buildTemplate } from "@/lib/tb";
-import { chartResiduals, niceStep, dataSeriesByBand, distinctKPoints, energyDomain, modelBandLines, modelEnergiesByKIndex, revisionTransform } from "@/lib/views/band-series";
+import { chartResiduals, niceStep, dataSeriesByBand, distinctKPoints, energyDomain, modelBandLines, modelEnergiesByKIndex } from "@/lib/views/band-series";
+import { revisionAlignment } from "@/lib/fit/bands/energy-alignment";
 
 describe("dataSeriesByBand", () => {
   it("groups points by band and sorts each along the path", () => {
@@ -67,7 +68,7 @@ describe("distinctKPoints and energyDomain", () => {
   });
 });
 
-describe("chartResiduals and revisionTransform", () => {
+describe("chartResiduals and revisionAlignment", () => {
   const energies = new Map([[0, [-1, 2]], [1, [-0.5, 1.5]]]);
   const points = [
     { kIndex: 0, band: 1, pathDistance: 0, energy: -1.1 },
@@ -90,7 +91,7 @@ describe("chartResiduals and revisionTransform", () => {
 
   it("takes δ and Z from fitted parameters when present, else from the options", () => {
     const options = { energyOffset: { value: 0.2 }, renormalisation: { value: 1.5, reference: -0.1 } };
-    expect(revisionTransform([{ name: "energy offset", value: 0.05 }], options)).toEqual({ offset: 0.05, renormalisation: 1.5, reference: -0.1 });
+    expect(revisionAlignment([{ name: "energy offset", value: 0.05 }], options)).toEqual({ offset: 0.05, renormalisation: 1.5, reference: -0.1 });
   });
 });
 

@@ -1,6 +1,6 @@
 import { loadDatasetPoints } from "@/db/queries/fit-data";
 import { bandsCsv } from "@/lib/export";
-import { alignmentOf } from "@/lib/server/fits/export";
+import { revisionAlignment } from "@/lib/fit/bands";
 import { requireResult, requireRevision, snapshotOf } from "@/lib/server/fits/views";
 import { workspaceRoute } from "@/lib/server/route";
 
@@ -11,7 +11,7 @@ export const GET = workspaceRoute({ minimumRole: "viewer" }, async ({ access, pa
   const snapshot = snapshotOf(details);
   const seen = new Set<number>();
   const dataK = (await loadDatasetPoints(snapshot.dataset.id)).filter((p) => !seen.has(p.kIndex) && seen.add(p.kIndex));
-  const csv = bandsCsv(result.fittedModel, dataK, alignmentOf(result, snapshot));
+  const csv = bandsCsv(result.fittedModel, dataK, revisionAlignment(result.parameters, snapshot.options));
   return new Response(csv, {
     headers: {
       "content-type": "text/csv; charset=utf-8",
