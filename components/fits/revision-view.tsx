@@ -22,6 +22,9 @@ const statusText: Record<RevisionDetails["status"], string> = {
   cancelled: "cancelled",
 };
 
+/** eV → meV without rounding noise (3e-4 eV is 0.3 meV, not 0.30000000000000004). */
+const inMeV = (ev: number) => Number((ev * 1000).toPrecision(12));
+
 function InputsSummary({ revision }: { revision: RevisionDetails }) {
   const { inputs } = revision;
   const free = inputs.model.parameters.filter((p) => p.free).length;
@@ -37,6 +40,7 @@ function InputsSummary({ revision }: { revision: RevisionDetails }) {
     ["Model", `${inputs.model.name}${inputs.model.template ? ` (template ${inputs.model.template})` : ""}: ${inputs.model.parameters.length} parameters, ${free} free`],
     ["Band mapping", mapping],
     ["Energy window", inputs.window ? `${formatQuantity(inputs.window.min, { unit: "eV", decimals: 2 })} to ${formatQuantity(inputs.window.max, { unit: "eV", decimals: 2 })}` : "every point"],
+    ["Band crossings", inputs.options.crossingTolerance > 0 ? `bands within ${inMeV(inputs.options.crossingTolerance)} meV of another take the degenerate-subspace derivative` : "not treated"],
     ["σ", inputs.options.sigma === "uniform" ? `${inputs.options.uniformSigma} eV for every point` : `from the data, ${inputs.options.uniformSigma} eV where missing`],
     ["Limits", `${inputs.options.maxIterations} iterations, ${inputs.options.timeLimitMs / 1000} s, ${inputs.options.starts} start${inputs.options.starts === 1 ? "" : "s"} (seed ${inputs.options.seed})`],
     ["Energy offset", `${inputs.options.energyOffset.free ? "fitted from" : "fixed at"} ${formatQuantity(inputs.options.energyOffset.value, { unit: "eV" })}`],
@@ -76,6 +80,12 @@ export function RevisionView({ slug, fitId, number, canEdit }: { slug: string; f
             <span className="tabular-nums">
               {" "}
               · RMS {formatQuantity(result.rms, { unit: "eV", decimals: 4 })} over {result.pointsUsed} points · reduced χ² {result.reducedChiSquared.toPrecision(4)} · {result.iterations} iterations ({result.stopReason.replace(/-/g, " ")})
+              {result.crossings ? (
+                <span data-testid="crossing-count">
+                  {" "}
+                  · {result.crossings.points} point{result.crossings.points === 1 ? "" : "s"} at band crossings (within {inMeV(result.crossings.tolerance)} meV)
+                </span>
+              ) : null}
             </span>
           ) : null}
         </p>

@@ -9,3 +9,4 @@ export {
 export { type SymmetricEigenSolver, createSymmetricEigenSolver } from "./symmetric-eigen";
 export { type GeneralisedEigenSolver, createGeneralisedEigenSolver } from "./generalised-eigen";
 export { type RandomSource, createRandom } from "./seeded-random";
+export { type ClusterDerivatives, clusterDerivatives, nearDegenerateClusters } from "./degenerate-subspace";

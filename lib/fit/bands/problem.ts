@@ -28,7 +28,8 @@ export interface Prediction {
  * one diagonalisation per distinct k-point per evaluation, shared by every point at that k), and ∂f_p/∂δ,
  * ∂f_p/∂Z from `alignmentDerivatives`. For the nearest mapping the assignment m(p) is held fixed while
  * differentiating: the objective is piecewise smooth and this is its derivative wherever the assignment
- * does not switch (finite differences agree there).
+ * does not switch (finite differences agree there). At an accidental crossing of model bands the band's
+ * derivative is the two-sided degenerate-subspace one (`crossingTolerance`, see `bandsWithGradients`).
  */
 export class BandResidualModel {
   private readonly modelParameterCount: number;
@@ -46,6 +47,8 @@ export class BandResidualModel {
     private readonly points: readonly KeptPoint[],
     private readonly slots: GlobalParameterSlots,
     mapping: BandMapping,
+    /** eV: bands closer than this get the degenerate-subspace derivative (0: off) */
+    private readonly crossingTolerance: number,
   ) {
     this.modelParameterCount = hamiltonian.parameterCount;
     this.bandCount = hamiltonian.orbitalCount;
@@ -99,12 +102,26 @@ export class BandResidualModel {
     return { values: this.values, jacobian };
   }
 
-  private solve(theta: Float64Array, withGradients: boolean): void {
+  /**
+   * How many points sit at an accidental crossing at θ: their model band within the crossing tolerance of
+   * another band, which some parameter moves apart (the flags of `bandsWithGradients`).
+   */
+  crossingPoints(theta: Float64Array): number {
+    const flags = new Uint8Array(this.energies.length);
+    this.solve(theta, true, flags);
+    const modelBands = new Int32Array(this.points.length);
+    this.fill(theta, modelBands);
+    return this.points.filter((point, i) => flags[point.kIndex * this.bandCount + modelBands[i]] === 1).length;
+  }
+
+  private solve(theta: Float64Array, withGradients: boolean, crossingsInto?: Uint8Array): void {
     bandsWithGradients(this.hamiltonian, theta.subarray(0, this.modelParameterCount), {
       gradients: withGradients,
       energiesInto: this.energies,
       gradientsInto: withGradients ? this.gradients : undefined,
       gradientBands: this.usedBands,
+      crossingTolerance: this.crossingTolerance,
+      crossingsInto,
     });
   }
 

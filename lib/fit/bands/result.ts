@@ -33,10 +33,13 @@ export function assembleBandFitResult(
     isOverlap: j < modelCount && compiled.parameterMatrix[j] === "overlap",
   }));
   const scale = dataEnergyScale(selection.kept.map((point) => point.energy));
+  const solution = Float64Array.from(fit.parameters, (p) => p.value);
+  const crossings = { tolerance: prepared.options.crossingTolerance, points: residualModel.crossingPoints(solution) };
   const warnings: BandFitWarning[] = [
     ...prepared.warnings,
     ...fit.warnings,
     ...implausibleParameterWarnings(plausibility, scale),
+    ...crossingWarnings(crossings, selection.kept.length, prepared.options.jacobian),
   ];
   const undetermined = new Set(warnings.filter((w) => UNDETERMINING.includes(w.kind)).flatMap((w) => w.parameters));
 
@@ -58,7 +61,7 @@ export function assembleBandFitResult(
   // An offset mapping fixes every point's model band; only the nearest mapping needs the bands at the solution.
   const modelBands = selection.kept.every((point) => point.modelBand >= 0)
     ? Int32Array.from(selection.kept, (point) => point.modelBand)
-    : residualModel.predict(Float64Array.from(fit.parameters, (p) => p.value)).modelBands;
+    : residualModel.predict(solution).modelBands;
   const residuals = selection.kept.map((point, i) => {
     const modelEnergy = fit.modelValues[i];
     return {
@@ -97,6 +100,7 @@ export function assembleBandFitResult(
     bands,
     residuals,
     pointsUsed: selection.kept.length,
+    crossings,
     pointsDropped: { ...selection.dropped },
     correlation: { names: fit.freeParameters, matrix: fit.correlation },
     trace: bestTrace,
@@ -112,6 +116,24 @@ export function assembleBandFitResult(
       parameters: prepared.document.parameters.map((p) => ({ ...p, value: fitted.get(p.name) ?? p.value })),
     },
   };
+}
+
+/** The warning that says how many points sit at accidental band crossings and how the fit treats them. */
+function crossingWarnings(crossings: { tolerance: number; points: number }, used: number, jacobian: "analytic" | "finite-difference"): BandFitWarning[] {
+  if (crossings.points === 0) return [];
+  const treatment =
+    jacobian === "analytic"
+      ? "the Jacobian uses the two-sided degenerate-subspace derivative (the mean of the derivatives for an increase and a decrease of each parameter)"
+      : "the finite-difference Jacobian straddles the crossing there";
+  return [
+    {
+      kind: "band-crossings",
+      parameters: [],
+      message:
+        `${crossings.points} of ${used} points lie where their model band meets another within ${Number((crossings.tolerance * 1000).toPrecision(12))} meV ` +
+        `(accidental crossings): a band's own derivative is not defined there, so ${treatment}`,
+    },
+  ];
 }
 
 /** RMS, max |x| and mean of residuals, eV. */

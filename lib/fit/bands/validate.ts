@@ -101,6 +101,7 @@ export function validateBandFit(input: unknown): BandFitValidation {
     selection.kept,
     { offset: np, renormalisation: np + 1, reference: options.renormalisation.reference },
     mapping,
+    options.crossingTolerance,
   );
   const warnings: BandFitWarning[] = [];
   if (dropped.window + dropped.unmapped + dropped.zeroWeight > 0)

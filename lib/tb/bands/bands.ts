@@ -7,6 +7,8 @@ import {
   createGeneralisedEigenSolver,
   createHermitianEigenSolver,
   createSymmetricEigenSolver,
+  clusterDerivatives,
+  nearDegenerateClusters,
 } from "../../linalg";
 import type { Vec3 } from "../geometry/vec3";
 import { type PreparedHamiltonian, type PreparedMatrix, assembleMatrix, checkParameterVector, prepareHamiltonian } from "../hamiltonian/prepare";
@@ -27,6 +29,17 @@ export interface BandGradientOptions {
    * bands needs only theirs, and skips their eigenvectors too.
    */
   gradientBands?: readonly [number, number];
+  /**
+   * eV; bands closer than this to a neighbour at a k-point form a near-degenerate cluster, whose bands get
+   * the two-sided degenerate-subspace derivative instead of their own Hellmann–Feynman value (see
+   * {@link bandsWithGradients}). Default 0: every band keeps its own.
+   */
+  crossingTolerance?: number;
+  /**
+   * nk × nb flags written when given: 1 for a band (within `gradientBands`) in a cluster whose derivative is
+   * not unique — an accidental crossing, where some parameter moves the cluster's bands apart — else 0.
+   */
+  crossingsInto?: Uint8Array;
 }
 
 export interface BandsWithGradients {
@@ -166,9 +179,16 @@ function accumulateExpectation(
 
 /**
  * Band energies at every prepared k-point and, by the Hellmann–Feynman theorem, their derivatives
- * ∂E_n/∂θ_i = ⟨ψ_n|∂H/∂θ_i − E_n ∂S/∂θ_i|ψ_n⟩ with S-normalised ψ_n. Allocation-free per k-point; this
- * is what the fitting engine calls every iteration. At exact degeneracies the individual band
- * derivatives depend on the eigenvector choice within the degenerate space (their sum does not).
+ * ∂E_n/∂θ_i = ⟨ψ_n|∂H/∂θ_i − E_n ∂S/∂θ_i|ψ_n⟩ with S-normalised ψ_n. Allocation-free per k-point away
+ * from crossings; this is what the fitting engine calls every iteration.
+ *
+ * Where sorted bands meet (closer than `crossingTolerance`), a band's own derivative is not defined and
+ * the Hellmann–Feynman value depends on which eigenvectors the solver returns. There, for each parameter
+ * alone, the cluster's bands get the two-sided derivative of degenerate perturbation theory
+ * (`clusterDerivatives` in lib/linalg: (μ_i + μ_{d+1−i})/2 from the eigenvalues μ of ∂H/∂θ_i − Ē ∂S/∂θ_i
+ * projected onto the cluster, Ē its mean energy) — what central differences along that parameter give.
+ * A step along several parameters at once moves a crossing's bands non-linearly; the Jacobian stays the
+ * column-wise derivative. The cluster's summed derivative (the trace) is the same either way.
  * @param theta - parameter vector in `compiled.parameters` order
  */
 export function bandsWithGradients(
@@ -191,16 +211,113 @@ export function bandsWithGradients(
   const bands = options.gradientBands ?? [0, n - 1];
   if (!(Number.isInteger(bands[0]) && Number.isInteger(bands[1]) && bands[0] >= 0 && bands[0] <= bands[1] && bands[1] < n))
     throw new RangeError(`gradientBands must be 0-based [first, last] within 0…${n - 1}, got [${bands.join(", ")}]`);
+  const tolerance = options.crossingTolerance ?? 0;
+  const flags = options.crossingsInto;
+  if (flags) {
+    if (flags.length !== nk * n) throw new RangeError(`crossingsInto must have length ${nk * n}`);
+    flags.fill(0);
+  }
   const w = workspaceFor(prepared);
   for (let k = 0; k < nk; k++) {
     solveAt(prepared, w, k, theta, wantGradients, bands);
     energies.set(w.eigen.values, k * n);
     if (!gradients) continue;
+    const clusters = tolerance > 0 ? nearDegenerateClusters(w.eigen.values, tolerance).filter(([a, b]) => b >= bands[0] && a <= bands[1]) : [];
+    // a cluster reaching past the requested bands needs its other members' eigenvectors too
+    if (clusters.length > 0 && (clusters[0][0] < bands[0] || clusters[clusters.length - 1][1] > bands[1]))
+      solveAt(prepared, w, k, theta, true, [Math.min(bands[0], clusters[0][0]), Math.max(bands[1], clusters[clusters.length - 1][1])]);
     const offset = k * n * np;
     accumulateExpectation(prepared.hamiltonian, k, w.eigen, n, np, gradients, offset, false, bands);
     if (prepared.overlap) accumulateExpectation(prepared.overlap, k, w.eigen, n, np, gradients, offset, true, bands);
+    for (const cluster of clusters) {
+      const accidental = applyClusterDerivatives(prepared, k, w.eigen, cluster, gradients, offset, bands);
+      if (flags && accidental) for (let b = Math.max(cluster[0], bands[0]); b <= Math.min(cluster[1], bands[1]); b++) flags[k * n + b] = 1;
+    }
   }
   return { energies, gradients };
+}
+
+// A cluster whose projected derivative has a spread above this (relative to its size, at least 1) is a
+// true crossing; below, the spread is rounding of a degeneracy by symmetry (common practice).
+const CROSSING_SPREAD = 1e-9;
+
+/**
+ * Replaces the gradients of one near-degenerate cluster's bands (those within `bands`) by the two-sided
+ * degenerate-subspace derivative, parameter by parameter. Returns whether some parameter moves the
+ * cluster's bands apart (an accidental crossing rather than a degeneracy by symmetry).
+ */
+function applyClusterDerivatives(
+  prepared: PreparedHamiltonian,
+  kIndex: number,
+  eigen: EigenOutput,
+  [first, last]: readonly [number, number],
+  gradients: Float64Array,
+  offset: number,
+  bands: readonly [number, number],
+): boolean {
+  const n = prepared.orbitalCount;
+  const np = prepared.parameterCount;
+  const d = last - first + 1;
+  let mean = 0;
+  for (let b = first; b <= last; b++) mean += eigen.values[b] / d;
+  const re = Array.from({ length: np }, () => new Float64Array(d * d));
+  const im = Array.from({ length: np }, () => new Float64Array(d * d));
+  projectCluster(prepared.hamiltonian, kIndex, eigen, n, first, d, 1, re, im);
+  if (prepared.overlap) projectCluster(prepared.overlap, kIndex, eigen, n, first, d, -mean, re, im);
+  let accidental = false;
+  for (let p = 0; p < np; p++) {
+    const { twoSided, spread, increase } = clusterDerivatives(re[p], im[p], d);
+    const size = Math.max(1, Math.abs(increase[0]), Math.abs(increase[d - 1]));
+    if (spread > CROSSING_SPREAD * size) accidental = true;
+    for (let b = Math.max(first, bands[0]); b <= Math.min(last, bands[1]); b++) gradients[offset + b * np + p] = twoSided[b - first];
+  }
+  return accidental;
+}
+
+/** Adds scale × ⟨ψ_a|∂M/∂θ_p|ψ_b⟩ for the cluster's bands a, b (0-based within it) into each parameter's d × d matrix. */
+function projectCluster(
+  matrix: PreparedMatrix,
+  kIndex: number,
+  eigen: EigenOutput,
+  n: number,
+  first: number,
+  d: number,
+  scale: number,
+  re: Float64Array[],
+  im: Float64Array[],
+) {
+  const { entry, parameter, coefficients, slotCount, upperSlots } = matrix;
+  const base = kIndex * slotCount * 2;
+  const vr = eigen.vectorsRe;
+  const vi = eigen.vectorsIm;
+  for (const s of upperSlots) {
+    const i = (entry[s] / n) | 0;
+    const j = entry[s] - i * n;
+    const cr = scale * coefficients[base + 2 * s];
+    const ci = scale * coefficients[base + 2 * s + 1];
+    const pr = re[parameter[s]];
+    const pi = im[parameter[s]];
+    for (let a = 0; a < d; a++) {
+      const va = (first + a) * n;
+      for (let b = 0; b < d; b++) {
+        const vb = (first + b) * n;
+        // conj(ψ_a,i) c ψ_b,j
+        let x = cr * vr[vb + j] - ci * vi[vb + j];
+        let y = cr * vi[vb + j] + ci * vr[vb + j];
+        let sumRe = vr[va + i] * x + vi[va + i] * y;
+        let sumIm = vr[va + i] * y - vi[va + i] * x;
+        if (i !== j) {
+          // the mirror slot (j, i) holds conj(c): conj(ψ_a,j) conj(c) ψ_b,i
+          x = cr * vr[vb + i] + ci * vi[vb + i];
+          y = cr * vi[vb + i] - ci * vr[vb + i];
+          sumRe += vr[va + j] * x + vi[va + j] * y;
+          sumIm += vr[va + j] * y - vi[va + j] * x;
+        }
+        pr[a * d + b] += sumRe;
+        pi[a * d + b] += sumIm;
+      }
+    }
+  }
 }
 
 /** Options of {@link computeBands}. */
