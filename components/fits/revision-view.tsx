@@ -40,12 +40,21 @@ function InputsSummary({ revision }: { revision: RevisionDetails }) {
     ["Model", `${inputs.model.name}${inputs.model.template ? ` (template ${inputs.model.template})` : ""}: ${inputs.model.parameters.length} parameters, ${free} free`],
     ["Band mapping", mapping],
     ["Energy window", inputs.window ? `${formatQuantity(inputs.window.min, { unit: "eV", decimals: 2 })} to ${formatQuantity(inputs.window.max, { unit: "eV", decimals: 2 })}` : "every point"],
-    ["Band crossings", inputs.options.crossingTolerance > 0 ? `bands within ${inMeV(inputs.options.crossingTolerance)} meV of another take the degenerate-subspace derivative` : "not treated"],
     ["σ", inputs.options.sigma === "uniform" ? `${inputs.options.uniformSigma} eV for every point` : `from the data, ${inputs.options.uniformSigma} eV where missing`],
     ["Limits", `${inputs.options.maxIterations} iterations, ${inputs.options.timeLimitMs / 1000} s, ${inputs.options.starts} start${inputs.options.starts === 1 ? "" : "s"} (seed ${inputs.options.seed})`],
     ["Energy offset", `${inputs.options.energyOffset.free ? "fitted from" : "fixed at"} ${formatQuantity(inputs.options.energyOffset.value, { unit: "eV" })}`],
     ["Renormalisation", `${inputs.options.renormalisation.free ? "fitted from" : "fixed at"} ${inputs.options.renormalisation.value}`],
   ];
+  // a result says what its fit used; one stored before crossings were treated has no tolerance
+  const crossingTolerance = revision.result ? (revision.result.crossings?.tolerance ?? null) : inputs.options.crossingTolerance;
+  rows.push([
+    "Band crossings",
+    crossingTolerance === null
+      ? "not treated (fitted before band crossings were)"
+      : crossingTolerance > 0
+        ? `bands within ${inMeV(crossingTolerance)} meV of another take the degenerate-subspace derivative`
+        : "not treated",
+  ]);
   if (revision.parentNumber) rows.splice(2, 0, ["Started from", `revision ${revision.parentNumber}`]);
   return (
     <dl className="grid grid-cols-1 gap-x-6 gap-y-1.5 text-sm sm:grid-cols-[max-content_1fr]">

@@ -173,12 +173,23 @@ export async function listRevisionNumbers(params: { workspaceId: string; fitId: 
   return rows.flatMap((row) => (row.number === null ? [] : [row.number]));
 }
 
-/** One revision of a workspace's fit (all columns, launcher's name and e-mail), or null. */
+/**
+ * One revision of a workspace's fit (all columns, launcher's name and e-mail, and what its dataset says
+ * about the data: source and energy reference), or null.
+ */
 export async function getRevision(params: { workspaceId: string; fitId: string; number: number }) {
   const rows = await db
-    .select({ revision: fitRevision, fit, launcherName: user.name, launcherEmail: user.email })
+    .select({
+      revision: fitRevision,
+      fit,
+      launcherName: user.name,
+      launcherEmail: user.email,
+      datasetSource: dataset.source,
+      datasetEnergyReference: dataset.energyReference,
+    })
     .from(fitRevision)
     .innerJoin(fit, eq(fit.id, fitRevision.fitId))
+    .innerJoin(dataset, eq(dataset.id, fit.datasetId))
     .leftJoin(user, eq(user.id, fitRevision.launchedBy))
     .where(and(eq(fit.workspaceId, params.workspaceId), eq(fit.id, params.fitId), eq(fitRevision.number, params.number)))
     .limit(1);

@@ -1,9 +1,4 @@
-export {
-  PHASE_CONVENTION,
-  type ParameterSet,
-  type ParameterSetProvenance,
-  buildParameterSet,
-  parameterSetJsonSchema,
-  parameterSetSchema,
-} from "./parameter-set";
+export { CONVENTIONS, ORBITAL_DEFINITIONS } from "./conventions";
+export { type ParameterSet, type ParameterSetBond, parameterSetJsonSchema, parameterSetSchema } from "./parameter-set-schema";
+export { type ParameterSetProvenance, type ParameterSetSettings, buildParameterSet } from "./parameter-set";
 export { DENSE_PATH_POINTS_PER_INVERSE_ANGSTROM, type ResidualCsvRow, bandsCsv, residualsCsv } from "./csv";

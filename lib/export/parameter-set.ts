@@ -1,103 +1,36 @@
-import { z } from "zod";
-import type { BandFitResult } from "@/lib/fit/bands";
-import type { EnergyAlignment } from "@/lib/fit/bands/energy-alignment";
-import { type RealSpaceElement, compileModel, expandHoppings } from "@/lib/tb";
+import { ENERGY_ALIGNMENT_FORMULA, ENERGY_OFFSET, RENORMALISATION, revisionAlignment } from "@/lib/fit/bands/energy-alignment";
+import type { BandMapping, EnergyWindow, FitOptions } from "@/lib/fit/bands/schema";
+import type { StoredResult } from "@/lib/fit/bands/stored-result";
+import {
+  type CompiledModel,
+  type RealSpaceContribution,
+  type RealSpaceElement,
+  type Vec3,
+  compileModel,
+  expandHoppings,
+  kPathVertices,
+  norm,
+} from "@/lib/tb";
+import { CONVENTIONS, ORBITAL_DEFINITIONS } from "./conventions";
+import { type ParameterSet, type ParameterSetBond, parameterSetSchema } from "./parameter-set-schema";
 
-/**
- * The exported parameter set (format "bandwright-parameter-set", version 1): everything needed to rebuild
- * H(k) — and S(k) when the model has overlaps — without Slater–Koster code, plus where the numbers came from.
- * Energies in eV, lengths in Å, wave vectors in 1/Å with 2π included.
- */
+/** The settings a revision ran with (its stored snapshot). */
+export interface ParameterSetSettings {
+  mapping: BandMapping;
+  window: EnergyWindow | null;
+  options: FitOptions;
+}
 
-/** The phase convention, stated in every document so that a reader needs nothing else. */
-export const PHASE_CONVENTION =
-  "H_ij(k) = δ_ij onsite[i] + Σ over hoppings with from = i, to = j of (value + i·imaginary) · exp(i k·(R1·a1 + R2·a2 + R3·a3 + τ_j − τ_i)); " +
-  "S_ij(k) = δ_ij + the same sum over overlaps. R = translation, a = lattice, τ = orbital positions (Cartesian Å), k Cartesian 1/Å. " +
-  "Both directions of every hopping are listed, so the sum is Hermitian as written.";
-
-const finite = z.number().refine(Number.isFinite, "must be a finite number");
-const vec3 = z.tuple([finite, finite, finite]);
-
-const realSpaceElementSchema = z.object({
-  /** orbital index (0-based, into `orbitals`) */
-  from: z.int().min(0),
-  to: z.int().min(0),
-  /** lattice translation of the `to` orbital, integer multiples of the lattice vectors */
-  translation: z.tuple([z.int(), z.int(), z.int()]),
-  /** real part (eV for hoppings, dimensionless for overlaps) */
-  value: finite,
-  /** imaginary part */
-  imaginary: finite,
-});
-
-export const parameterSetSchema = z
-  .object({
-    format: z.literal("bandwright-parameter-set"),
-    version: z.literal(1),
-    units: z.object({ energy: z.literal("eV"), length: z.literal("Å"), wavevector: z.literal("1/Å, 2π included") }),
-    phaseConvention: z.string(),
-    /** lattice vectors, Cartesian Å (1–3) */
-    lattice: z.array(vec3).min(1).max(3),
-    sites: z.array(
-      z.object({
-        label: z.string(),
-        species: z.string(),
-        /** fractional coordinates of the lattice vectors */
-        position: vec3,
-        orbitals: z.array(z.string()).min(1),
-      }),
-    ),
-    /** the basis, in the order of every matrix index */
-    orbitals: z.array(
-      z.object({
-        index: z.int().min(0),
-        /** "site:orbital" */
-        label: z.string(),
-        site: z.string(),
-        orbital: z.string(),
-        /** τ, Cartesian Å */
-        position: vec3,
-      }),
-    ),
-    parameters: z.array(
-      z.object({
-        name: z.string(),
-        value: finite,
-        unit: z.enum(["eV", "1"]),
-        /** one standard error; null when fixed or not determined by the data */
-        standardError: finite.nullable(),
-        free: z.boolean(),
-        determined: z.boolean(),
-      }),
-    ),
-    /**
-     * The fit compared data with E_ref + (E_model − E_ref)/Z + δ; these are δ (eV), Z and E_ref (eV). The
-     * hopping list gives E_model (δ = 0, Z = 1 change nothing).
-     */
-    energyAlignment: z.object({ offset: finite, renormalisation: finite, reference: finite }),
-    /** on-site energy of every orbital, eV (index = orbital index) */
-    onsite: z.array(finite),
-    hoppings: z.array(realSpaceElementSchema),
-    /** overlaps beyond the on-site identity; empty for orthogonal models */
-    overlaps: z.array(realSpaceElementSchema),
-    statistics: z.object({ rms: finite, reducedChiSquared: finite, pointsUsed: z.int(), converged: z.boolean(), stopReason: z.string() }),
-    provenance: z.object({
-      dataset: z.object({ id: z.string(), name: z.string(), sha256: z.string().regex(/^[0-9a-f]{64}$/) }),
-      fit: z.object({ id: z.string(), name: z.string() }),
-      revision: z.int().min(1),
-      launchedBy: z.string().nullable(),
-      launchedAt: z.iso.datetime(),
-      finishedAt: z.iso.datetime().nullable(),
-      exportedAt: z.iso.datetime(),
-      software: z.object({ name: z.literal("bandwright"), version: z.string() }),
-    }),
-  })
-  .strict();
-export type ParameterSet = z.output<typeof parameterSetSchema>;
-
-/** Where an export came from (the routes fill it from the revision). */
+/** Where an export came from (the routes fill it from the revision and its dataset). */
 export interface ParameterSetProvenance {
-  dataset: { id: string; name: string; sha256: string };
+  dataset: {
+    id: string;
+    name: string;
+    sha256: string;
+    source: "calculation" | "photoemission";
+    /** what the data's energies are measured from, as the dataset states it; null when it does not */
+    energyReference: string | null;
+  };
   fit: { id: string; name: string };
   revision: number;
   launchedBy: string | null;
@@ -108,30 +41,95 @@ export interface ParameterSetProvenance {
   softwareVersion: string;
 }
 
-const plainElement = (e: RealSpaceElement) => ({ from: e.from, to: e.to, translation: e.translation, value: e.value, imaginary: e.imaginary });
+/** A number when the imaginary part is zero, else [real, imaginary] (the model document's factor convention). */
+const complexValue = (re: number, im: number): number | [number, number] => (im === 0 ? re : [re, im]);
+
+const keyOf = (compiled: CompiledModel, from: number, to: number, translation: readonly number[]) =>
+  `${compiled.orbitals[from].label}→${compiled.orbitals[to].label}@${translation.join(",")}`;
+
+function contributions(compiled: CompiledModel, list: readonly RealSpaceContribution[]) {
+  return list.map((c) => ({ name: compiled.parameters[c.parameter].name, coefficient: complexValue(c.re, c.im) }));
+}
+
+function bondEntry(compiled: CompiledModel, e: RealSpaceElement): ParameterSetBond {
+  return {
+    key: keyOf(compiled, e.from, e.to, e.translation),
+    from: compiled.orbitals[e.from].label,
+    to: compiled.orbitals[e.to].label,
+    matrixEntry: [e.from, e.to],
+    translation: [e.translation[0] || 0, e.translation[1] || 0, e.translation[2] || 0], // no −0
+    vector: [e.bond[0], e.bond[1], e.bond[2]],
+    length: norm(e.bond),
+    value: complexValue(e.value, e.imaginary),
+    parameters: contributions(compiled, e.contributions),
+    partner: keyOf(compiled, e.to, e.from, e.translation.map((n) => -n || 0)),
+  };
+}
 
 /**
- * Builds the parameter set of a finished fit from its fitted model document (the real-space list comes from
- * `expandHoppings` at the fitted values).
- * @param result - the fit's result without per-point residuals (what a revision stores)
- * @param alignment - the δ (eV), Z and E_ref (eV) the fit used (fitted values, or the fixed options)
+ * Covariance s²(JᵀWJ)⁻¹ of the free parameters from what a result stores: C_ij = r_ij σ_i σ_j, exact since
+ * r_ij = C_ij/√(C_ii C_jj) and σ_i = √C_ii (GSL reference manual, "Nonlinear Least-Squares Fitting:
+ * Covariance matrix of best fit parameters"); null wherever a parameter is not determined.
  */
-export function buildParameterSet(
-  result: Omit<BandFitResult, "residuals">,
-  alignment: EnergyAlignment,
-  provenance: ParameterSetProvenance,
-): ParameterSet {
+function covarianceOf(result: StoredResult): ParameterSet["covariance"] {
+  const { names, matrix } = result.correlation;
+  const error = names.map((name) => result.parameters.find((p) => p.name === name)?.standardError ?? null);
+  return {
+    parameters: names,
+    matrix: matrix.map((row, i) =>
+      row.map((r, j) => {
+        const si = error[i];
+        const sj = error[j];
+        return r === null || si === null || sj === null ? null : r * si * sj;
+      }),
+    ),
+    correlation: matrix,
+  };
+}
+
+function globalParameter(result: StoredResult, name: string, value: number, free: boolean) {
+  return { value, free, standardError: result.parameters.find((p) => p.name === name)?.standardError ?? null };
+}
+
+function kPathOf(compiled: CompiledModel): ParameterSet["kPath"] {
+  const path = compiled.document.kPath;
+  if (!path || path.length < 2) return null;
+  const vertices = kPathVertices(compiled.document);
+  return path.map((p, i) => ({ label: p.label, reduced: [...p.reduced] as Vec3, cartesian: [...vertices[i].k] as Vec3, jump: p.jump ?? false }));
+}
+
+/**
+ * Builds the parameter set of a finished revision from its fitted model (the bond lists come from
+ * `expandHoppings` at the fitted values), its settings and its provenance, and validates it.
+ * @param result - the revision's stored result, in today's parameter names (`readStoredResult`)
+ * @param settings - the revision's mapping, window and options
+ */
+export function buildParameterSet(result: StoredResult, settings: ParameterSetSettings, provenance: ParameterSetProvenance): ParameterSet {
   const compiled = compileModel(result.fittedModel);
   const realSpace = expandHoppings(compiled, compiled.initialValues);
   const byName = new Map(result.parameters.map((p) => [p.name, p]));
+  const alignment = revisionAlignment(result.parameters, settings.options);
+  const { options } = settings;
+  const usedOrbitals = [...new Set(compiled.orbitals.map((o) => o.orbital))];
   const document: ParameterSet = {
     format: "bandwright-parameter-set",
-    version: 1,
+    version: 2,
     units: { energy: "eV", length: "Å", wavevector: "1/Å, 2π included" },
-    phaseConvention: PHASE_CONVENTION,
+    conventions: { ...CONVENTIONS },
+    spin: "spinless",
     lattice: compiled.lattice.map((v) => [v[0], v[1], v[2]]),
-    sites: result.fittedModel.sites.map((s) => ({ label: s.label, species: s.species, position: s.position, orbitals: [...s.orbitals] })),
-    orbitals: compiled.orbitals.map((o) => ({ index: o.index, label: o.label, site: o.site, orbital: o.orbital, position: [...o.position] })),
+    reciprocalLattice: compiled.reciprocal.map((v) => [v[0], v[1], v[2]]),
+    sites: compiled.document.sites.map((s) => ({ label: s.label, species: s.species, position: [...s.position], orbitals: [...s.orbitals] })),
+    orbitals: compiled.orbitals.map((o) => ({
+      index: o.index,
+      label: o.label,
+      site: o.site,
+      species: o.species,
+      orbital: o.orbital,
+      position: [...o.position],
+      onsite: { value: realSpace.onsite[o.index], parameters: contributions(compiled, realSpace.onsiteContributions[o.index]) },
+    })),
+    orbitalDefinitions: Object.fromEntries(usedOrbitals.map((o) => [o, ORBITAL_DEFINITIONS[o]])),
     parameters: compiled.parameters.map((p) => {
       const fitted = byName.get(p.name);
       return {
@@ -141,21 +139,48 @@ export function buildParameterSet(
         standardError: fitted?.standardError ?? null,
         free: p.free,
         determined: fitted?.determined ?? !p.free,
+        integral: p.integral ?? null,
+        description: p.description ?? null,
       };
     }),
-    energyAlignment: { offset: alignment.offset, renormalisation: alignment.renormalisation, reference: alignment.reference },
-    onsite: realSpace.onsite,
-    hoppings: realSpace.hoppings.map(plainElement),
-    overlaps: realSpace.overlaps.map(plainElement),
+    covariance: covarianceOf(result),
+    energyAlignment: {
+      formula: ENERGY_ALIGNMENT_FORMULA,
+      offset: globalParameter(result, ENERGY_OFFSET, alignment.offset, options.energyOffset.free),
+      renormalisation: globalParameter(result, RENORMALISATION, alignment.renormalisation, options.renormalisation.free),
+      reference: alignment.reference,
+      dataEnergyZero: provenance.dataset.energyReference ?? "unstated",
+    },
+    bonds: realSpace.hoppings.map((e) => bondEntry(compiled, e)),
+    overlaps: realSpace.overlaps.map((e) => bondEntry(compiled, e)),
+    kPath: kPathOf(compiled),
+    fit: {
+      mapping: settings.mapping,
+      window: settings.window,
+      sigma: { policy: options.sigma, uniform: options.uniformSigma },
+      bandWeights: options.bandWeights ?? {},
+      starts: options.starts,
+      seed: options.seed,
+      maxIterations: options.maxIterations,
+      timeLimitMs: options.timeLimitMs,
+      jacobian: options.jacobian,
+      harrisonStart: options.harrisonStart,
+      // the result says what the fit used; one stored before crossings were treated has none
+      crossingTolerance: result.crossings?.tolerance ?? null,
+    },
     statistics: {
       rms: result.rms,
+      maxAbsResidual: result.maxAbsResidual,
+      chiSquared: result.chiSquared,
       reducedChiSquared: result.reducedChiSquared,
       pointsUsed: result.pointsUsed,
+      pointsDropped: { ...result.pointsDropped },
+      crossingPoints: result.crossings?.points ?? null,
       converged: result.converged,
       stopReason: result.stopReason,
     },
     provenance: {
-      dataset: provenance.dataset,
+      dataset: { id: provenance.dataset.id, name: provenance.dataset.name, sha256: provenance.dataset.sha256, source: provenance.dataset.source },
       fit: provenance.fit,
       revision: provenance.revision,
       launchedBy: provenance.launchedBy,
@@ -166,14 +191,4 @@ export function buildParameterSet(
     },
   };
   return parameterSetSchema.parse(document);
-}
-
-/** The JSON Schema (draft 2020-12) of the parameter set, generated from {@link parameterSetSchema}. */
-export function parameterSetJsonSchema(): Record<string, unknown> {
-  return {
-    ...z.toJSONSchema(parameterSetSchema, { target: "draft-2020-12", io: "output" }),
-    $id: "https://bandwright.invalid/schemas/parameter-set-v1.json",
-    title: "Bandwright parameter set, version 1",
-    description: "A fitted tight-binding parameter set with its real-space hopping list and provenance. " + PHASE_CONVENTION,
-  };
 }

@@ -68,7 +68,7 @@ export {
   overlapDerivativeAt,
   prepareHamiltonian,
 } from "./hamiltonian/prepare";
-export { type RealSpaceElement, type RealSpaceModel, expandHoppings } from "./hamiltonian/expand";
+export { type RealSpaceContribution, type RealSpaceElement, type RealSpaceModel, expandHoppings } from "./hamiltonian/expand";
 export {
   type BandGradientOptions,
   type BandsWithGradients,

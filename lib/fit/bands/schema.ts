@@ -65,21 +65,23 @@ export function resolveModelSpec(spec: ModelSpec): ModelDocument {
 export const bandMappingSchema = z.discriminatedUnion("kind", [
   z
     .object({
-      kind: z.literal("offset"),
+      kind: z.literal("offset").describe("data bands map to consecutive model bands"),
       dataBands: z
         .tuple([bandNumber, bandNumber])
         .refine(([first, last]) => first <= last, "the first data band must not be above the last")
-        .optional(),
-      firstModelBand: bandNumber.default(1),
+        .optional()
+        .describe("[first, last] data band mapped (default: every data band present); others are dropped"),
+      firstModelBand: bandNumber.default(1).describe("the model band the first data band maps to (from 1)"),
     })
     .strict(),
   z
     .object({
-      kind: z.literal("nearest"),
+      kind: z.literal("nearest").describe("each point is compared with the model band nearest to it"),
       modelBands: z
         .tuple([bandNumber, bandNumber])
         .refine(([first, last]) => first <= last, "the first model band must not be above the last")
-        .optional(),
+        .optional()
+        .describe("[first, last] model bands considered (default: all)"),
     })
     .strict(),
 ]);
@@ -91,17 +93,15 @@ export const DEFAULT_BAND_MAPPING: BandMapping = { kind: "offset", firstModelBan
 
 /** Points whose data energy lies outside [min, max] (eV, inclusive) are dropped and counted. */
 export const energyWindowSchema = z
-  .object({ min: finite, max: finite })
+  .object({ min: finite.describe("lowest data energy kept, eV"), max: finite.describe("highest data energy kept, eV") })
   .strict()
   .refine((w) => w.min < w.max, { message: "the window's min must be below its max (eV)", path: ["max"] });
 export type EnergyWindow = z.output<typeof energyWindowSchema>;
 
 /**
- * The energy offset δ (eV) and the renormalisation factor Z (dimensionless) enter every predicted energy as
- *   E_pred(k) = E_ref + (E_model(k) − E_ref)/Z + δ,
- * with E_ref = `renormalisation.reference` (eV, default 0: the data's own energy zero, e.g. E_F or the VBM).
- * Z > 1 narrows the model bands about E_ref (the photoemission convention: bands measured narrower than
- * calculated by Z); δ shifts everything. Fixed at δ = 0 and Z = 1 they change nothing.
+ * The energy offset δ (eV) and the renormalisation factor Z (dimensionless) enter every predicted energy
+ * as energy-alignment.ts states and applies it, with E_ref = `renormalisation.reference` (eV, default 0:
+ * the data's own energy zero, e.g. E_F or the VBM). Fixed at δ = 0 and Z = 1 they change nothing.
  */
 const energyOffsetSchema = z
   .object({

@@ -1,6 +1,5 @@
 import "server-only";
 import type { RevisionDetails } from "@/db/queries/fits";
-import { revisionAlignment } from "@/lib/fit/bands";
 import { type ParameterSet, buildParameterSet } from "@/lib/export";
 import packageJson from "@/package.json";
 import { requireResult, snapshotOf } from "./views";
@@ -9,8 +8,8 @@ import { requireResult, snapshotOf } from "./views";
 export function exportRevision(details: RevisionDetails): ParameterSet {
   const result = requireResult(details);
   const snapshot = snapshotOf(details);
-  return buildParameterSet(result, revisionAlignment(result.parameters, snapshot.options), {
-    dataset: snapshot.dataset,
+  return buildParameterSet(result, snapshot, {
+    dataset: { ...snapshot.dataset, source: details.datasetSource, energyReference: details.datasetEnergyReference },
     fit: { id: details.fit.id, name: details.fit.name },
     revision: details.revision.number,
     launchedBy: details.launcherName,

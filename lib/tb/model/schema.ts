@@ -23,15 +23,13 @@ const speciesSchema = z.string().regex(/^[A-Za-z][A-Za-z0-9_]*$/, "a species is 
 /** A bond integral's name as structured fields: `V_ppπ[Si–Si,1]` is { hamiltonian, pp, π, [Si, Si], 1 }. */
 export const bondIntegralKeySchema = z
   .object({
-    matrix: z.enum(["hamiltonian", "overlap"]),
-    /** shell pair, lower shell first */
-    bond: z.enum(SHELL_PAIRS),
-    /** angular momentum about the bond */
-    kind: z.enum(BOND_KINDS),
-    /** [species of the lower shell, species of the upper shell] (alphabetical for same-shell integrals) */
-    pair: z.tuple([speciesSchema, speciesSchema]),
-    /** neighbour shell, from 1 */
-    shell: z.int().min(1),
+    matrix: z.enum(["hamiltonian", "overlap"]).describe('"hamiltonian" (V, eV) or "overlap" (S, dimensionless)'),
+    bond: z.enum(SHELL_PAIRS).describe('the shell pair, lower shell first (s < s* < p < d): "ss", "sp", "pp", …'),
+    kind: z.enum(BOND_KINDS).describe("angular momentum about the bond: σ, π or δ"),
+    pair: z
+      .tuple([speciesSchema, speciesSchema])
+      .describe("[species of the lower shell, species of the upper shell]; alphabetical for same-shell integrals"),
+    shell: z.int().min(1).describe("neighbour shell, from 1"),
   })
   .strict();
 
