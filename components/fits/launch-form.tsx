@@ -6,11 +6,10 @@ import { useDeferredValue, useMemo, useState } from "react";
 import { Button, Notice, Panel, SelectField, TextField } from "@/components/ui";
 import { NEUTRAL_ALIGNMENT } from "@/lib/fit/bands/energy-alignment";
 import { DEFAULT_BAND_MAPPING, bandMappingSchema, fitOptionsSchema, modelSpecSchema, resolveModelSpec } from "@/lib/fit/bands/schema";
-import { TEMPLATE_IDS, type ModelDocument, type TemplateId, buildTemplate } from "@/lib/tb";
+import { TEMPLATE_IDS, type TemplateId, buildTemplate } from "@/lib/tb";
 import { dataBandStyles } from "@/lib/views/band-colours";
 import { bandPairs } from "@/lib/views/band-mapping";
 import { type LaunchDraft, defaultLaunchOptions, parameterDrafts, readLaunchDraft } from "@/lib/views/launch-draft";
-import type { RevisionDetails } from "@/lib/views/responses";
 import { RouteError, fitApi } from "./api";
 import { useDatasetPoints } from "./hooks";
 import { MappingPicture } from "./mapping-picture";
@@ -27,43 +26,6 @@ function templateDraft(template: TemplateId, datasetId: string, name: string): L
     mapping: { kind: "offset", firstDataBand: "", lastDataBand: "", firstModelBand: "1" },
     window: { min: "", max: "" },
     options: defaultLaunchOptions,
-  };
-}
-
-/** The form of a new revision: revision n's inputs with its fitted values as start values. */
-export function draftFromRevision(revision: RevisionDetails, name: string): LaunchDraft {
-  const { inputs } = revision;
-  const document: ModelDocument = revision.result?.fittedModel ?? inputs.model;
-  const o = inputs.options;
-  return {
-    name,
-    datasetId: inputs.dataset.id,
-    source: { kind: "document", document },
-    parameters: parameterDrafts(document.parameters),
-    mapping:
-      inputs.mapping.kind === "nearest"
-        ? { kind: "nearest", firstDataBand: "", lastDataBand: "", firstModelBand: "1" }
-        : {
-            kind: "offset",
-            firstDataBand: inputs.mapping.dataBands ? String(inputs.mapping.dataBands[0]) : "",
-            lastDataBand: inputs.mapping.dataBands ? String(inputs.mapping.dataBands[1]) : "",
-            firstModelBand: String(inputs.mapping.firstModelBand),
-          },
-    window: inputs.window ? { min: String(inputs.window.min), max: String(inputs.window.max) } : { min: "", max: "" },
-    options: {
-      maxIterations: String(o.maxIterations),
-      timeLimitSeconds: String(o.timeLimitMs / 1000),
-      starts: String(o.starts),
-      seed: String(o.seed),
-      sigma: o.sigma,
-      uniformSigma: String(o.uniformSigma),
-      bandWeights: Object.fromEntries(Object.entries(o.bandWeights ?? {}).map(([k, v]) => [k, String(v)])),
-      offsetValue: String(revision.result?.parameters.find((p) => p.name === "energy offset")?.value ?? o.energyOffset.value),
-      offsetFree: o.energyOffset.free,
-      renormalisationValue: String(revision.result?.parameters.find((p) => p.name === "renormalisation")?.value ?? o.renormalisation.value),
-      renormalisationFree: o.renormalisation.free,
-      notifyByEmail: o.notifyByEmail,
-    },
   };
 }
 

@@ -2,7 +2,8 @@
 
 import { Notice } from "@/components/ui";
 import { useRevision } from "./hooks";
-import { LaunchForm, draftFromRevision } from "./launch-form";
+import { draftFromRevision } from "@/lib/views/launch-draft";
+import { LaunchForm } from "./launch-form";
 
 /** The launch form pre-filled from revision `from` (fitted values as start values). */
 export function NewRevisionForm({ slug, fitId, from }: { slug: string; fitId: string; from: number }) {

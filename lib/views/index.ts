@@ -43,6 +43,7 @@ export {
   type LaunchRequest,
   type ModelSourceDraft,
   type ParameterDraft,
+  draftFromRevision,
   launchRequestSchema,
   parameterDrafts,
   readLaunchDraft,

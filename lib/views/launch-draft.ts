@@ -1,8 +1,10 @@
 import { z } from "zod";
+import { revisionAlignment } from "@/lib/fit/bands/energy-alignment";
 import type { BandMappingInput, FitOptionsInput } from "@/lib/fit/bands/schema";
 import { launchFitSchema } from "@/lib/server/fits/inputs";
 import type { ModelDocument, ModelParameter, TemplateId } from "@/lib/tb";
 import { FieldErrors } from "./number-field";
+import type { RevisionDetails } from "./responses";
 
 /** A parameter row of the launch form, as typed (numbers are text until the form is read). */
 export interface ParameterDraft {
@@ -208,4 +210,42 @@ export function readLaunchDraft(draft: LaunchDraft): DraftReading {
   }
   if (errors.empty) errors.add("model", "the model does not validate");
   return { ok: false, errors: errors.byField };
+}
+
+/** The form of a new revision: revision n's inputs with its fitted values as start values. */
+export function draftFromRevision(revision: RevisionDetails, name: string): LaunchDraft {
+  const { inputs } = revision;
+  const document: ModelDocument = revision.result?.fittedModel ?? inputs.model;
+  const o = inputs.options;
+  const alignment = revisionAlignment(revision.result?.parameters ?? [], o);
+  return {
+    name,
+    datasetId: inputs.dataset.id,
+    source: { kind: "document", document },
+    parameters: parameterDrafts(document.parameters),
+    mapping:
+      inputs.mapping.kind === "nearest"
+        ? { kind: "nearest", firstDataBand: "", lastDataBand: "", firstModelBand: "1" }
+        : {
+            kind: "offset",
+            firstDataBand: inputs.mapping.dataBands ? String(inputs.mapping.dataBands[0]) : "",
+            lastDataBand: inputs.mapping.dataBands ? String(inputs.mapping.dataBands[1]) : "",
+            firstModelBand: String(inputs.mapping.firstModelBand),
+          },
+    window: inputs.window ? { min: String(inputs.window.min), max: String(inputs.window.max) } : { min: "", max: "" },
+    options: {
+      maxIterations: String(o.maxIterations),
+      timeLimitSeconds: String(o.timeLimitMs / 1000),
+      starts: String(o.starts),
+      seed: String(o.seed),
+      sigma: o.sigma,
+      uniformSigma: String(o.uniformSigma),
+      bandWeights: Object.fromEntries(Object.entries(o.bandWeights ?? {}).map(([k, v]) => [k, String(v)])),
+      offsetValue: String(alignment.offset),
+      offsetFree: o.energyOffset.free,
+      renormalisationValue: String(alignment.renormalisation),
+      renormalisationFree: o.renormalisation.free,
+      notifyByEmail: o.notifyByEmail,
+    },
+  };
 }

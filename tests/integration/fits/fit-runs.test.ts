@@ -55,6 +55,8 @@ describe("a fit on a fixture dataset", () => {
     for (const [name, value] of Object.entries(honeycombTruth))
       expect(done.result?.parameters.find((p) => p.name === name)?.value).toBeCloseTo(value, 5);
     expect(done.result?.rms).toBeLessThan(1e-6);
+    // K's degeneracy is by symmetry, not a crossing: the count is there and 0
+    expect(done.result?.crossings).toEqual({ tolerance: 1e-5, points: 0 });
   });
 
   it("stores one residual row per point used, paged and sorted in the database", async () => {

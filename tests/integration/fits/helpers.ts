@@ -3,13 +3,18 @@
 // routes, and worker processes of the tests' own.
 import { type ChildProcess, spawn } from "node:child_process";
 import { createHash, randomUUID } from "node:crypto";
+import { readFileSync } from "node:fs";
+import { eq } from "drizzle-orm";
 import { db } from "@/db/client";
+import { getDatasetForFit } from "@/db/queries/fit-data";
+import { claimRevision, createFitWithFirstRevision, finishRevision } from "@/db/queries/fits";
 import { getWorkspaceBySlug } from "@/db/queries/workspaces";
 import { sql } from "drizzle-orm";
 import { dataset, datasetPoint, fitRevision } from "@/db/schema";
 import { parseDispersionFile } from "@/lib/datasets";
 import { type ModelDocument, type Vec3, buildTemplate, compileModel, computeBands, templateKPath } from "@/lib/tb";
 import type { TestClient } from "@/tests/support/client";
+import type { Team } from "@/tests/support/workspace";
 
 /**
  * Long-format CSV of every band of `doc` at its own values along its k-path (Cartesian 1/Å, eV), with the
@@ -98,6 +103,34 @@ export async function siliconDataset(slug: string, name = "Halvorsen Si sample 7
 }
 
 /**
+ * A revision stored before bond integrals were spelled V_ppπ[Si–Si,1]: the snapshot and result of
+ * tests/support/legacy-spelling-revision.json (made with the code of f0e7d08: sp3s* Si, bands 1–4, names
+ * such as V_pp_pi[Si-Si,1]), written as the worker wrote results then, on a silicon dataset whose energy
+ * reference is the valence-band maximum. Returns the fit's id; the revision is number 1, succeeded.
+ */
+export async function insertLegacyRevision(team: Team): Promise<string> {
+  const legacy = JSON.parse(readFileSync("tests/support/legacy-spelling-revision.json", "utf8"));
+  const workspace = (await getWorkspaceBySlug(team.slug))!;
+  const datasetId = await siliconDataset(team.slug, "Halvorsen Si sample 7 (2024)");
+  await db.update(dataset).set({ energyReference: "valence-band maximum" }).where(eq(dataset.id, datasetId));
+  const stored = (await getDatasetForFit({ workspaceId: workspace.id, datasetId }))!;
+  const me = (await team.editor.get("/api/auth/get-session")).body as { user: { id: string } };
+  const created = await createFitWithFirstRevision({
+    workspaceId: workspace.id,
+    datasetId,
+    name: "sp3s* from 2024",
+    notes: "",
+    launchedBy: me.user.id,
+    inputs: { ...legacy.inputs, dataset: { id: stored.id, name: stored.name, sha256: stored.sha256 } },
+    launchWarnings: [],
+  });
+  const attempt = await claimRevision({ revisionId: created.revisionId, runner: "2024 worker" });
+  if (!attempt || !(await finishRevision({ revisionId: created.revisionId, attempt, status: "succeeded", result: legacy.result, residuals: [] })))
+    throw new Error("the legacy revision could not be stored");
+  return created.fitId;
+}
+
+/**
  * Launch body of a fit that runs until its time limit: many starts on sp3s* silicon from perturbed
  * values, so that it is mid-fit whenever a test acts on it.
  */
@@ -121,6 +154,7 @@ export type RevisionBody = {
     rms: number;
     cancelled: boolean;
     pointsUsed: number;
+    crossings?: { tolerance: number; points: number };
     parameters: { name: string; value: number; standardError: number | null }[];
     fittedModel: ModelDocument;
     warnings: unknown[];

@@ -1,6 +1,9 @@
+import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
+import { readStoredResult } from "@/lib/fit/bands";
 import { buildTemplate } from "@/lib/tb";
-import { type LaunchDraft, defaultLaunchOptions, parameterDrafts, readLaunchDraft } from "@/lib/views/launch-draft";
+import { type LaunchDraft, defaultLaunchOptions, draftFromRevision, parameterDrafts, readLaunchDraft } from "@/lib/views/launch-draft";
+import { revisionDetailsSchema } from "@/lib/views/responses";
 import { readNumber } from "@/lib/views/number-field";
 
 function draft(change: (d: LaunchDraft) => void = () => {}): LaunchDraft {
@@ -107,5 +110,36 @@ describe("readLaunchDraft", () => {
     if (!reading.ok || !("format" in reading.request.model)) throw new Error("expected a model document");
     expect(reading.request.model.parameters[0].free).toBe(!document.parameters[0].free);
     expect(reading.request.model.sites).toEqual(document.sites);
+  });
+});
+
+describe("draftFromRevision", () => {
+  // A revision stored before bond integrals were spelled V_ppπ[Si–Si,1] (tests/support, made with f0e7d08),
+  // as the revision route serves it: inputs and result read with today's names.
+  const legacy = JSON.parse(readFileSync("tests/support/legacy-spelling-revision.json", "utf8"));
+  const served = {
+    number: 1,
+    parentNumber: null,
+    status: "succeeded",
+    progress: null,
+    fitName: "Halvorsen Si sample 7",
+    failureReason: null,
+    launchWarnings: [],
+    launchedBy: "Jonas Brekkestad",
+    createdAt: "2031-03-01T10:00:00.000Z",
+    startedAt: "2031-03-01T10:00:01.000Z",
+    finishedAt: "2031-03-01T10:00:02.000Z",
+    inputs: legacy.inputs,
+    result: readStoredResult(legacy.result),
+  };
+
+  it("pre-fills the form of a new revision from an old-spelling revision, with today's names, and the form reads", () => {
+    const revision = revisionDetailsSchema.parse(served);
+    const d = draftFromRevision(revision, "next");
+    expect(d.parameters.map((p) => p.name)).toContain("V_ppπ[Si–Si,1]");
+    const fitted = legacy.result.parameters.find((p: { name: string }) => p.name === "V_pp_pi[Si-Si,1]").value;
+    expect(Number(d.parameters.find((p) => p.name === "V_ppπ[Si–Si,1]")!.value)).toBe(fitted);
+    const reading = readLaunchDraft(d);
+    expect(reading.ok).toBe(true);
   });
 });
