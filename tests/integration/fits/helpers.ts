@@ -123,6 +123,8 @@ export async function insertLegacyRevision(team: Team): Promise<string> {
     launchedBy: me.user.id,
     inputs: { ...legacy.inputs, dataset: { id: stored.id, name: stored.name, sha256: stored.sha256 } },
     launchWarnings: [],
+    // no queue job: the result is written below, as a worker of the time wrote it
+    sendJob: async () => "no job (stored before issue 11)",
   });
   const attempt = await claimRevision({ revisionId: created.revisionId, runner: "2024 worker" });
   if (!attempt || !(await finishRevision({ revisionId: created.revisionId, attempt, status: "succeeded", result: legacy.result, residuals: [] })))
