@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { energyUnits } from "@/lib/units";
+import { MAX_HEADER_CELLS, groupDigits } from "./limits";
 
 /** How the columns of an uploaded band file map onto points: the one schema shared by form, route and tests. */
 
@@ -46,7 +47,12 @@ export const datasetMappingSchema = z
     band: z.object({ column: columnName }).optional(),
     energy: z.object({
       column: columnName.optional(),
-      columns: z.array(columnName).min(1, "name one energy column per band").optional(),
+      columns: z
+        .array(columnName)
+        .min(1, "name one energy column per band")
+        // A wide file needs one k column besides its energies, within the header's cell limit.
+        .max(MAX_HEADER_CELLS - 1, `at most ${groupDigits(MAX_HEADER_CELLS - 1)} energy columns (a header holds at most ${groupDigits(MAX_HEADER_CELLS)} cells)`)
+        .optional(),
       unit: z.enum(energyUnits),
     }),
     /** Uncertainty σ of each energy; its unit defaults to the energy unit. */

@@ -1,6 +1,7 @@
 import { toElectronvolts } from "@/lib/units";
 import { type Delimiter, describeDelimiter } from "./delimiter";
 import type { IssueCollector } from "./issues";
+import { MAX_BAND_INDEX, groupDigits } from "./limits";
 import type { DatasetMapping } from "./mapping";
 import { describeNumberCell, parseDecimalCell } from "./numbers";
 import type { PointTableBuilder } from "./pointTable";
@@ -122,10 +123,17 @@ export function createRowReader(
       let bandFromColumn = 0;
       if (band) {
         const value = parseDecimalCell(fields[band.index]);
-        if (Number.isInteger(value) && value >= 1) bandFromColumn = value;
+        if (Number.isInteger(value) && value >= 1 && value <= MAX_BAND_INDEX) bandFromColumn = value;
         else {
           rowOk = false;
-          fail(band, row, `band index “${fields[band.index].trim()}” is not a positive integer (bands count from 1)`);
+          const cell = fields[band.index].trim();
+          fail(
+            band,
+            row,
+            Number.isInteger(value) && value > MAX_BAND_INDEX
+              ? `band index “${cell}” is above the limit of ${groupDigits(MAX_BAND_INDEX)} (bands count from 1; is this the band column?)`
+              : `band index “${cell}” is not a positive integer (bands count from 1)`,
+          );
         }
       }
       for (let i = 0; i < energyColumns.length; i++) {
