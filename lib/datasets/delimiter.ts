@@ -47,22 +47,47 @@ export function splitRecords(texts: readonly string[], delimiter: Delimiter): Sp
   return { fields, problems };
 }
 
-const consistentCount = (rows: string[][]): number | null =>
-  rows.length > 0 && rows.every((r) => r.length === rows[0].length) ? rows[0].length : null;
+const isSpaceOrTab = (c: number) => c === 32 || c === 9;
+
+/**
+ * The number of cells {@link splitRecords} gives a record, counted without splitting it (no string per
+ * cell, so a header can be measured before it is split): delimiters outside quotes plus one (`""` inside
+ * quotes toggles twice), or the runs of spaces and tabs inside the trimmed text plus one.
+ * @param text - one complete record
+ * @param delimiter - the field separator
+ */
+export function countCells(text: string, delimiter: Delimiter): number {
+  let cells = 1;
+  if (delimiter === "whitespace") {
+    const trimmed = text.trim();
+    for (let i = 1; i < trimmed.length; i++)
+      if (isSpaceOrTab(trimmed.charCodeAt(i)) && !isSpaceOrTab(trimmed.charCodeAt(i - 1))) cells++;
+    return cells;
+  }
+  const separator = delimiter.charCodeAt(0);
+  let quoted = false;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (c === 34 /* " */) quoted = !quoted;
+    else if (c === separator && !quoted) cells++;
+  }
+  return cells;
+}
 
 /**
  * Picks the delimiter that splits a sample of records (header first) into the same number of cells, more
  * than one: tab, then semicolon, then comma, then whitespace. When none is consistent, the one giving the
  * header most cells wins, so that the parse then reports the ragged rows; a one-column file reads as comma.
+ * Cells are counted, not split, so detection costs one pass per candidate however long the records are.
  * @param sample - the first records of the file, header first
  */
 export function detectDelimiter(sample: readonly string[]): Delimiter {
   const candidates: Delimiter[] = [...CHARACTER_DELIMITERS, "whitespace"];
-  const splits = candidates.map((d) => ({ d, rows: splitRecords(sample, d).fields }));
-  const consistent = splits.find(({ rows }) => (consistentCount(rows) ?? 0) > 1);
+  const counts = candidates.map((d) => ({ d, cells: sample.map((text) => countCells(text, d)) }));
+  const consistent = counts.find(({ cells }) => cells.length > 0 && cells[0] > 1 && cells.every((n) => n === cells[0]));
   if (consistent) return consistent.d;
-  const widest = splits.reduce((best, s) => ((s.rows[0]?.length ?? 0) > (best.rows[0]?.length ?? 0) ? s : best));
-  return (widest.rows[0]?.length ?? 0) > 1 ? widest.d : ",";
+  const widest = counts.reduce((best, c) => ((c.cells[0] ?? 0) > (best.cells[0] ?? 0) ? c : best));
+  return (widest.cells[0] ?? 0) > 1 ? widest.d : ",";
 }
 
 /** How a delimiter is named in messages. */

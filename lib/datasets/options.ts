@@ -1,9 +1,17 @@
-/** Limits of one parse; both are refusals with a clear message, never silent truncation. */
+import { groupDigits } from "./limits";
+
+/** Limits of one parse (refusals with a clear message, never silent truncation), and how it yields. */
 export interface ParseOptions {
   /** Largest accepted file in bytes. Default {@link DEFAULT_MAX_BYTES} (25 MiB). */
   maxBytes?: number;
   /** Largest accepted number of points (energies) in the file. Default {@link DEFAULT_MAX_POINTS}. */
   maxPoints?: number;
+  /**
+   * Awaited after each chunk (at most 64 KiB) and between the steps that follow the reading, so that a
+   * server answers other requests during a long parse (the upload passes one that waits for setImmediate).
+   * Default: none (the parse of a file in memory then runs within one task).
+   */
+  pause?: () => Promise<void>;
 }
 
 /** 25 MiB = 26 214 400 bytes. */
@@ -13,15 +21,17 @@ export const DEFAULT_MAX_POINTS = 500_000;
 
 export type ResolvedParseOptions = Required<ParseOptions>;
 
+const noPause = async (): Promise<void> => {};
+
 /** Fills in the defaults once; rejects limits that are not positive integers. */
 export function resolveParseOptions(options: ParseOptions = {}): ResolvedParseOptions {
-  const resolved = {
+  const limits = {
     maxBytes: options.maxBytes ?? DEFAULT_MAX_BYTES,
     maxPoints: options.maxPoints ?? DEFAULT_MAX_POINTS,
   };
-  for (const [name, value] of Object.entries(resolved))
+  for (const [name, value] of Object.entries(limits))
     if (!Number.isInteger(value) || value <= 0) throw new RangeError(`${name} must be a positive integer, got ${value}`);
-  return resolved;
+  return { ...limits, pause: options.pause ?? noPause };
 }
 
 /**
@@ -29,7 +39,7 @@ export function resolveParseOptions(options: ParseOptions = {}): ResolvedParseOp
  * @param bytes - a size in bytes
  */
 export function describeByteLimit(bytes: number): string {
-  const grouped = `${bytes.toLocaleString("en-US").replace(/,/g, " ")} bytes`;
+  const grouped = `${groupDigits(bytes)} bytes`;
   const mib = bytes / (1024 * 1024);
   if (mib < 1) return grouped;
   return `${Number.isInteger(mib) ? mib : mib.toFixed(1)} MiB (${grouped})`;

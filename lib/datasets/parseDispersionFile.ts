@@ -1,6 +1,7 @@
 import type { ByteSource } from "./byteSource";
-import { type Delimiter, detectDelimiter, splitRecords } from "./delimiter";
+import { type Delimiter, countCells, describeDelimiter, detectDelimiter, splitRecords } from "./delimiter";
 import { type FileIssue, IssueCollector, StopParsing } from "./issues";
+import { MAX_HEADER_CELLS, groupDigits } from "./limits";
 import type { DatasetMapping } from "./mapping";
 import { type ParseOptions, resolveParseOptions } from "./options";
 import { type DataPoint, type PointTable, PointTableBuilder, tablePoints } from "./pointTable";
@@ -21,10 +22,11 @@ const DETECTION_SAMPLE_ROWS = 20;
  * Reads a CSV/TSV band file against its mapping into columns, streaming: the file is never held as one
  * string, and points live in typed arrays (no object per row or point).
  * All-or-nothing: any bad row refuses the whole file with every problem listed by row and column (the first
- * 50, and the count). Stops early on binary data, invalid UTF-8 and the size and point limits.
+ * 50, and the count). Stops early on binary data, invalid UTF-8, the size and point limits and the fixed
+ * limits of `limits.ts` (line length, header cells: checked before the header is split).
  * @param source - the file's bytes (Web ReadableStream, Node Readable or other async iterable, or in memory)
  * @param mapping - a mapping validated by `datasetMappingSchema`
- * @param options - limits (bytes, points); defaults in `options.ts`
+ * @param options - limits (bytes, points) and the pause between chunks; defaults in `options.ts`
  * @returns the points as a {@link PointTable} (k in 1/Å, energies and σ in eV), a summary and warnings; or the issues
  */
 export async function parseDispersionTable(
@@ -32,7 +34,7 @@ export async function parseDispersionTable(
   mapping: DatasetMapping,
   options?: ParseOptions,
 ): Promise<DispersionTableResult> {
-  const { maxBytes, maxPoints } = resolveParseOptions(options);
+  const { maxBytes, maxPoints, pause } = resolveParseOptions(options);
   const issues = new IssueCollector();
   const rows = new PointTableBuilder({ sigma: !!mapping.sigma, weight: !!mapping.weight, label: !!mapping.label });
   let delimiter: Delimiter = ",";
@@ -65,6 +67,15 @@ export async function parseDispersionTable(
   const start = (sample: TextRecord[]): boolean => {
     delimiter = mapping.delimiter === "auto" ? detectDelimiter(sample.map((r) => r.text)) : mapping.delimiter;
     headerRow = sample[0].line;
+    const cells = countCells(sample[0].text, delimiter);
+    if (cells > MAX_HEADER_CELLS) {
+      issues.addRow(
+        headerRow,
+        `the header has ${groupDigits(cells)} cells when split on ${describeDelimiter(delimiter)}, ` +
+          `more than the limit of ${groupDigits(MAX_HEADER_CELLS)}`,
+      );
+      return false;
+    }
     const header = splitRecords([sample[0].text], delimiter);
     if (header.problems.length > 0) {
       header.problems.forEach((p) => issues.addRow(headerRow, `header: ${p.message}`));
@@ -79,6 +90,7 @@ export async function parseDispersionTable(
   try {
     let sample: TextRecord[] | null = [];
     for await (const batch of readTextRecordBatches(source, maxBytes)) {
+      await pause();
       if (!sample) {
         readBatch(batch);
         continue;
@@ -106,8 +118,9 @@ export async function parseDispersionTable(
 
   if (dataRows === 0) issues.addRow(headerRow, "the file has a header but no data rows");
   if (issues.count > 0) return refused(issues);
-  const resolved = resolvePoints(rows, mapping, issues);
+  const resolved = await resolvePoints(rows, mapping, issues, pause);
   if (!resolved) return refused(issues);
+  await pause();
   return {
     ok: true,
     table: resolved.table,
@@ -121,7 +134,7 @@ export async function parseDispersionTable(
  * stores the columns directly).
  * @param source - the file's bytes
  * @param mapping - a mapping validated by `datasetMappingSchema`
- * @param options - limits (bytes, points)
+ * @param options - limits (bytes, points) and the pause between chunks
  */
 export async function parseDispersionFile(
   source: ByteSource,

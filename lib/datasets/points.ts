@@ -27,9 +27,15 @@ const PATH_LENGTH_TOLERANCE = 1e-3;
  * 0 and scaled to the path's length, with a warning; k is interpolated linearly inside each segment.
  * @param rows - the points read from the rows, k columns still holding the file's values
  * @param mapping - the validated mapping
+ * @param pause - awaited between the steps (each one pass over the points)
  */
-export function resolvePoints(rows: PointTableBuilder, mapping: DatasetMapping, issues: IssueCollector): ResolvedTable | null {
-  return mapping.k.kind === "path" ? resolvePathDistances(rows, mapping, issues) : resolveCoordinates(rows, mapping);
+export async function resolvePoints(
+  rows: PointTableBuilder,
+  mapping: DatasetMapping,
+  issues: IssueCollector,
+  pause: () => Promise<void>,
+): Promise<ResolvedTable | null> {
+  return mapping.k.kind === "path" ? resolvePathDistances(rows, mapping, issues, pause) : resolveCoordinates(rows, mapping, pause);
 }
 
 function numberKPoints(rows: PointTableBuilder): { kIndex: Int32Array; kPoints: KPointIndex } {
@@ -39,9 +45,11 @@ function numberKPoints(rows: PointTableBuilder): { kIndex: Int32Array; kPoints: 
   return { kIndex, kPoints };
 }
 
-function resolveCoordinates(rows: PointTableBuilder, mapping: DatasetMapping): ResolvedTable {
+async function resolveCoordinates(rows: PointTableBuilder, mapping: DatasetMapping, pause: () => Promise<void>): Promise<ResolvedTable> {
   columnsToCartesianInPlace(mapping.k, rows);
+  await pause();
   const { kIndex, kPoints } = numberKPoints(rows);
+  await pause();
   const band = rows.band.subarray(0, rows.length);
   const coordinates = assignPathCoordinates({
     kIndex,
@@ -57,7 +65,12 @@ function resolveCoordinates(rows: PointTableBuilder, mapping: DatasetMapping): R
   return { table: rows.finish(kIndex, coordinates.pathDistance), ticks: coordinates.ticks, warnings: coordinates.warnings };
 }
 
-function resolvePathDistances(rows: PointTableBuilder, mapping: DatasetMapping, issues: IssueCollector): ResolvedTable | null {
+async function resolvePathDistances(
+  rows: PointTableBuilder,
+  mapping: DatasetMapping,
+  issues: IssueCollector,
+  pause: () => Promise<void>,
+): Promise<ResolvedTable | null> {
   const vertices = placePathVertices(mapping.k.path ?? [], mapping.k.lattice);
   const length = vertices.at(-1)?.distance ?? 0;
   if (!(length > 0)) {
@@ -93,6 +106,7 @@ function resolvePathDistances(rows: PointTableBuilder, mapping: DatasetMapping, 
     pathDistance[i] = s;
     [rows.kx[i], rows.ky[i], rows.kz[i]] = at.k;
   }
+  await pause();
   const { kIndex } = numberKPoints(rows);
   return {
     table: rows.finish(kIndex, pathDistance),

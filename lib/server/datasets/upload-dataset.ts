@@ -4,6 +4,7 @@ import { findDatasetBySha256, insertDatasetWithPoints } from "@/db/queries/datas
 import { describeByteLimit, parseDatasetMapping, parseDispersionTable, type FileIssue } from "@/lib/datasets";
 import { env } from "@/lib/env";
 import type { WorkspaceAccess } from "@/lib/server/workspace-access";
+import { yieldToEventLoop } from "@/lib/server/yield-to-event-loop";
 import { readUploadParts } from "./read-upload";
 import { datasetRecord, sha256Hex } from "./stored-dataset";
 
@@ -100,10 +101,12 @@ export async function uploadDataset(request: Request, access: WorkspaceAccess): 
   const existing = await findDatasetBySha256({ workspaceId: access.workspace.id, sha256 });
   if (existing) return conflict(access.workspace.slug, existing);
 
-  // The stored bytes, not anything the browser parsed, decide: re-read them as a stream.
+  // The stored bytes, not anything the browser parsed, decide: re-read them as a stream, letting other
+  // requests run between chunks (a 500 000-point parse would otherwise hold the server for a second).
   const parsed = await parseDispersionTable(new Blob([bytes]).stream(), mapping.mapping, {
     maxBytes,
     maxPoints: env.DATASET_MAX_POINTS,
+    pause: yieldToEventLoop,
   });
   if (!parsed.ok) {
     const shown = parsed.issues.length < parsed.issueCount ? ` (the first ${parsed.issues.length} are listed)` : "";
