@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { positiveIntFromUrl } from "./url-integer";
 
 /** Limits the dataset routes and the rename form share. */
 export const datasetNameMaxLength = 200;
@@ -26,9 +27,9 @@ export const maxPointsPageSize = 500;
  * `pageSize` (1–500, default 50), `sort` (a column, `-` in front for descending; default `index`, file order).
  */
 export const pointsQuerySchema = z.object({
-  band: z.coerce.number().int().positive("band is a positive integer").optional(),
-  page: z.coerce.number().int().positive("page is a positive integer").default(1),
-  pageSize: z.coerce.number().int().min(1).max(maxPointsPageSize, `at most ${maxPointsPageSize} points per page`).default(50),
+  band: positiveIntFromUrl("band").optional(),
+  page: positiveIntFromUrl("page").default(1),
+  pageSize: positiveIntFromUrl("pageSize", maxPointsPageSize).default(50),
   sort: z
     .string()
     .default("index")

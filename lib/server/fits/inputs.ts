@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { bandMappingSchema, energyWindowSchema, fitOptionsSchema, modelSpecSchema } from "@/lib/fit/bands";
+import { INT4_MAX } from "@/lib/schemas/url-integer";
 
 /** Body of `POST /api/workspaces/{slug}/fits`: a fit on one dataset and its first revision. */
 export const launchFitSchema = z
@@ -29,7 +30,7 @@ const parameterChangeSchema = z
  */
 export const newRevisionSchema = z
   .object({
-    from: z.int().min(1, "revisions are numbered from 1"),
+    from: z.int().min(1, "revisions are numbered from 1").max(INT4_MAX, "no revision has so high a number"),
     model: modelSpecSchema.optional(),
     parameters: z.record(z.string(), parameterChangeSchema).optional(),
     mapping: bandMappingSchema.optional(),

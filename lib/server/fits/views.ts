@@ -1,26 +1,27 @@
 import "server-only";
 import { type RevisionDetails, getFit, getRevision } from "@/db/queries/fits";
 import { type StoredResult, readStoredResult } from "@/lib/fit/bands";
+import { positiveIntFromUrl } from "@/lib/schemas/url-integer";
 import { AppError } from "../errors";
 import { type RevisionSnapshot, revisionSnapshotSchema } from "./snapshot";
 
-/** Revision numbers are stored as PostgreSQL `integer` (int4): 2³¹ − 1 at most (PostgreSQL 15 manual §8.1.1). */
-const maxRevisionNumber = 2_147_483_647;
+const revisionNumberSchema = positiveIntFromUrl("revision");
 
 /**
- * A revision number as written in a URL (decimal, no sign, no leading zero, 1 … 2³¹ − 1), or null. A larger
- * one cannot exist, and passing it to the database would fail the query (a 500) instead of finding nothing.
+ * A revision number as written in a URL (digits, no leading zero, 1 … 2³¹ − 1: `positiveIntFromUrl`), or
+ * null. A larger one cannot exist, and passing it to the database would fail the query (a 500) instead of
+ * finding nothing.
  */
 export function parseRevisionNumber(raw: unknown): number | null {
-  if (typeof raw !== "string" || !/^[1-9][0-9]{0,9}$/.test(raw)) return null;
-  const n = Number(raw);
-  return n <= maxRevisionNumber ? n : null;
+  if (typeof raw !== "string") return null;
+  const parsed = revisionNumberSchema.safeParse(raw);
+  return parsed.success && String(parsed.data) === raw ? parsed.data : null;
 }
 
-/** Parses a revision number from the URL; anything else is a 404. */
+/** Parses a revision number from the URL; anything else (also a number no revision can have) is a 404. */
 export function revisionNumber(raw: string | undefined): number {
   const n = parseRevisionNumber(raw);
-  if (n === null) throw new AppError("not_found");
+  if (n === null) throw new AppError("not_found", "No such revision of this fit.");
   return n;
 }
 
