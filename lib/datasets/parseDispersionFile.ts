@@ -121,12 +121,8 @@ export async function parseDispersionTable(
   const resolved = await resolvePoints(rows, mapping, issues, pause);
   if (!resolved) return refused(issues);
   await pause();
-  return {
-    ok: true,
-    table: resolved.table,
-    summary: summariseTable(resolved.table, resolved.ticks, delimiter),
-    warnings: resolved.warnings,
-  };
+  const summary = summariseTable(resolved.table, resolved.ticks, delimiter, resolved.warnings);
+  return { ok: true, table: resolved.table, summary, warnings: summary.warnings ?? [] };
 }
 
 /**

@@ -24,6 +24,8 @@ export interface DatasetSummary {
   hasLabel: boolean;
   /** The delimiter the file was read with (detected when the mapping says "auto"). */
   delimiter: Delimiter;
+  /** What the upload warned about (path rescaled, one k-point, …); absent in datasets stored before. */
+  warnings?: string[];
 }
 
 const range = (values: Float64Array) => {
@@ -37,15 +39,25 @@ const range = (values: Float64Array) => {
 };
 
 /**
- * Summarises parsed points, one pass per column.
+ * Summarises parsed points, one pass per column, with the warnings of the parse and those about the
+ * summary itself (points that all share one k-point).
  * @param table - at least one point
+ * @param warnings - the warnings of the k resolution
  */
-export function summariseTable(table: PointTable, ticks: AxisTick[], delimiter: Delimiter): DatasetSummary {
+export function summariseTable(table: PointTable, ticks: AxisTick[], delimiter: Delimiter, warnings: readonly string[]): DatasetSummary {
   const bands = new Set<number>();
   for (let i = 0; i < table.length; i++) bands.add(table.band[i]);
   let kPointCount = 0;
   for (let i = 0; i < table.length; i++) if (table.kIndex[i] >= kPointCount) kPointCount = table.kIndex[i] + 1;
   const kx = range(table.kx), ky = range(table.ky), kz = range(table.kz);
+  const singleK =
+    kPointCount === 1
+      ? [
+          `all ${table.length} points share one k-point, k = (${[table.kx[0], table.ky[0], table.kz[0]].map((x) => Number((x + 0).toPrecision(6))).join(", ")}) 1/Å: ` +
+            "the file holds band energies but no dispersion. A fit can determine from it only what the energies at " +
+            "that k-point fix (often the on-site energies), and refuses parameters they cannot separate",
+        ]
+      : [];
   return {
     pointCount: table.length,
     bandCount: bands.size,
@@ -59,5 +71,6 @@ export function summariseTable(table: PointTable, ticks: AxisTick[], delimiter: 
     hasWeight: table.weight !== null,
     hasLabel: table.labelId?.some((id) => id >= 0) ?? false,
     delimiter,
+    warnings: [...warnings, ...singleK],
   };
 }

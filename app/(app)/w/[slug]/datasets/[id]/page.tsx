@@ -90,6 +90,15 @@ export default async function DatasetPage({ params, searchParams }: { params: Pr
         }
       />
       <div className="flex flex-col gap-6">
+        {dataset.summary.warnings?.length ? (
+          <Notice tone="warning" title="Warnings from the upload">
+            <ul className="list-disc pl-5">
+              {dataset.summary.warnings.map((warning) => (
+                <li key={warning}>{warning}</li>
+              ))}
+            </ul>
+          </Notice>
+        ) : null}
         <Panel title="Bands" description="Data points coloured by band; labelled k-points on the axis.">
           <Suspense fallback={<p className="h-[420px] text-sm text-ink-muted">Loading the chart…</p>}>
             <Chart dataset={dataset} />
