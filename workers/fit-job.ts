@@ -65,7 +65,7 @@ async function runAttempt(loaded: LoadedRevision, attempt: number, context: FitJ
   if (!snapshot.success) return fail("The stored inputs of this revision cannot be read.");
   const { model, mapping, window, options } = snapshot.data;
   const points = await retryWhileUnreachable(`fit ${revisionId}: loading points`, () => loadDatasetPoints(snapshot.data.dataset.id));
-  const validation = validateBandFit({ points, model, mapping, window: window ?? undefined, options });
+  const validation = validateBandFit({ datasetName: snapshot.data.dataset.name, points, model, mapping, window: window ?? undefined, options });
   if (!validation.ok) return fail(`The fit's inputs no longer pass the checks: ${new BandFitError(validation.issues).message}`);
 
   const controller = new AbortController();

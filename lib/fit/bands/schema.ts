@@ -200,6 +200,8 @@ export type BandFitPoint = z.input<typeof bandFitPointSchema>;
 
 /** Everything a band fit needs. */
 export const bandFitInputSchema = z.object({
+  /** the dataset's name, for messages about its points */
+  datasetName: z.string().optional(),
   points: z.array(bandFitPointSchema).min(1, "a fit needs at least one data point"),
   model: modelSpecSchema,
   mapping: bandMappingSchema.optional(),
@@ -241,6 +243,7 @@ export const bandFitWarningKinds = [
   "starts-incomplete",
   "points-dropped",
   "band-crossings",
+  "single-k-point",
 ] as const;
 
 /** Why a fit stopped; the meanings are those of the least-squares engine (`StopReason`). */

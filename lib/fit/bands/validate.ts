@@ -13,6 +13,7 @@ import { type PointSelection, selectPoints } from "./points";
 import { ENERGY_OFFSET, RENORMALISATION } from "./energy-alignment";
 import { BandResidualModel } from "./problem";
 import { redundantWithGlobals } from "./redundancy";
+import { checkSingleKPoint } from "./single-k-point";
 import {
   type BandFitIssue,
   type BandFitWarning,
@@ -54,7 +55,8 @@ const zodIssues = (error: z.ZodError, prefix = ""): BandFitIssue[] =>
  * the model (it must compile), the mapping (model bands that exist), the window and weights (they must
  * leave more points than free parameters), the global parameters (bounds, names, redundancy with the
  * model: a free offset with every on-site energy free, or a free renormalisation with every H parameter
- * free, determines nothing and is refused).
+ * free, determines nothing and is refused); and, for points that all lie at one k-point, whether their
+ * energies determine the free parameters (refused if not, a warning if so: `single-k-point.ts`).
  * @param input - untrusted input (parsed JSON), shape {@link bandFitInputSchema}
  */
 export function validateBandFit(input: unknown): BandFitValidation {
@@ -104,6 +106,11 @@ export function validateBandFit(input: unknown): BandFitValidation {
     options.crossingTolerance,
   );
   const warnings: BandFitWarning[] = [];
+  if (selection.kPoints.length === 1) {
+    const single = checkSingleKPoint({ residualModel, parameters, kept: selection.kept, k: selection.kPoints[0], datasetName: data.datasetName });
+    if ("issue" in single) return { ok: false, issues: [single.issue] };
+    warnings.push(single.warning);
+  }
   if (dropped.window + dropped.unmapped + dropped.zeroWeight > 0)
     warnings.push({ kind: "points-dropped", parameters: [], message: `${kept} of ${data.points.length} points used: ${droppedText}` });
   return {

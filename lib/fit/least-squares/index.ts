@@ -1,5 +1,6 @@
 export { fitLeastSquares, fitLeastSquaresAsync, type FitControl } from "./fit";
 export { LeastSquaresError, type LeastSquaresErrorCode } from "./errors";
+export { solutionStatistics } from "./statistics";
 export {
   leastSquaresOptionsSchema,
   normaliseLeastSquaresOptions,

@@ -64,7 +64,7 @@ async function prepareSnapshot(request: RevisionRequest): Promise<{ snapshot: Re
   const points = await loadDatasetPoints(dataset.id);
   const mapping = request.mapping ?? DEFAULT_BAND_MAPPING;
   const options = request.options ?? fitOptionsSchema.parse({});
-  const validation = validateBandFit({ points, model, mapping, window: request.window, options });
+  const validation = validateBandFit({ datasetName: dataset.name, points, model, mapping, window: request.window, options });
   if (!validation.ok) refuse(validation.issues);
   const snapshot = revisionSnapshotSchema.parse({
     model,
