@@ -33,11 +33,11 @@ interface ChildFigures {
 
 /** In the child: parse the file once, print time, memory and the largest event-loop delay as JSON. */
 async function parseOnce(file: string, mode: Mode): Promise<void> {
+  const bytes = readFileSync(file);
   const delay = monitorEventLoopDelay({ resolution: 10 });
   delay.enable();
   // The histogram records from its second tick on: let it take a first sample before the parse.
   await new Promise((resolve) => setTimeout(resolve, 30));
-  const bytes = readFileSync(file);
   const startMb = process.memoryUsage().rss / 2 ** 20;
   const started = performance.now();
   const result = await parseDispersionTable(new Blob([bytes]).stream(), datasetMappingSchema.parse(largeFileMapping), {
