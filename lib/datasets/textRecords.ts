@@ -60,17 +60,17 @@ export async function* readTextRecordBatches(source: ByteSource, maxBytes: numbe
   // A UTF-16 byte-order mark: the file is text, only in an encoding we do not read.
   const isUtf16 = () => (head[0] === 0xff && head[1] === 0xfe) || (head[0] === 0xfe && head[1] === 0xff);
 
+  // A NUL byte says "binary" (or UTF-16): a clearer reason than the length of a line without newlines.
+  function refuseNul(text: string, row: number): void {
+    if (text.includes("\0"))
+      throw fileIssue(row, isUtf16() ? UTF16_MESSAGE : "the file contains a NUL byte: this looks like a binary file, not delimited text");
+  }
+
   function takeLine(raw: string, out: TextRecord[]): void {
     lineNumber++;
     const line = raw.endsWith("\r") ? raw.slice(0, -1) : raw;
+    refuseNul(line, lineNumber);
     if (overLineLimit(line)) throw fileIssue(lineNumber, LINE_TOO_LONG);
-    if (line.includes("\0"))
-      throw fileIssue(
-        lineNumber,
-        isUtf16()
-          ? UTF16_MESSAGE
-          : "the file contains a NUL byte: this looks like a binary file, not delimited text",
-      );
     const quotes = line.includes('"') ? quoteCount(line) : 0;
     if (open) {
       open.bytes += 1 + utf8Length(line);
@@ -118,7 +118,10 @@ export async function* readTextRecordBatches(source: ByteSource, maxBytes: numbe
     }
     partialLine = text.slice(from);
     // More UTF-16 units than the limit has bytes: over it whatever the characters (each takes ≥ 1 byte).
-    if (partialLine.length > MAX_LINE_BYTES) throw fileIssue(lineNumber + 1, LINE_TOO_LONG);
+    if (partialLine.length > MAX_LINE_BYTES) {
+      refuseNul(partialLine, lineNumber + 1);
+      throw fileIssue(lineNumber + 1, LINE_TOO_LONG);
+    }
     yield batch;
   }
   const rest = partialLine + decode(undefined);

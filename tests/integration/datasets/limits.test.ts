@@ -50,8 +50,7 @@ describe("band indices the database cannot hold", () => {
 
 describe("a header line of 20 MB", () => {
   it("is refused with the line limit and stores nothing", async () => {
-    const extra = Array.from({ length: 2_000_000 }, (_, i) => `,x${i}`).join("").slice(0, 20_000_000);
-    const refusal = await expectRefused(`kx,band,E${extra}\n0,1,-1\n`);
+    const refusal = await expectRefused(`kx,band,E${",x".repeat(10_000_000)}\n0,1,-1\n`);
     expect(refusal.error.issues).toEqual([
       { row: 1, column: null, columnName: null, message: "this line is longer than the limit of 1 MiB (1 048 576 bytes) for one line" },
     ]);

@@ -68,9 +68,8 @@ describe("band indices above the limit (100 000)", () => {
 
 describe("headers and lines too long to read", () => {
   it("refuses a 20 MB header line before splitting it", async () => {
-    // One line of 20 000 000 bytes ("kx,ky,band,E," then c0,c1,… cut to length), then a data row.
-    const cells = Array.from({ length: 2_500_000 }, (_, i) => `c${i}`).join(",").slice(0, 20_000_000 - 13);
-    const text = `kx,ky,band,E,${cells}\n0,0,1,1\n`;
+    // One line of 20 000 001 bytes ("kx,ky,band,E," then "c," ten million times), then a data row.
+    const text = `kx,ky,band,E,${"c,".repeat(9_999_994)}\n0,0,1,1\n`;
     const r = refusedWith(await parseDispersionFile(text, longMapping()));
     expect(r.issues).toEqual([
       { row: 1, column: null, columnName: null, message: "this line is longer than the limit of 1 MiB (1 048 576 bytes) for one line" },
@@ -100,6 +99,13 @@ describe("headers and lines too long to read", () => {
       columnName: null,
       message: "this line is longer than the limit of 1 MiB (1 048 576 bytes) for one line",
     });
+  });
+
+  it("calls a long run of bytes without a newline but with a NUL binary, not an over-long line", async () => {
+    const bytes = new Uint8Array(2 * 1024 * 1024).fill(0x41);
+    bytes[1000] = 0;
+    const r = refusedWith(await parseDispersionFile(bytes, longMapping()));
+    expect(r.issues.at(-1)).toMatchObject({ row: 1, message: expect.stringMatching(/NUL byte.*binary/) });
   });
 
   it("counts the limit in bytes of UTF-8, not in characters", async () => {
